@@ -42,4 +42,9 @@ if [ ! -x node_modules/.bin/next ] || [ package-lock.json -nt node_modules/.pack
   npm ci --no-audit --no-fund
 fi
 
+# One test or bench stack at a time on this machine (they share fixed ports).
+if [ "$mode" != "start" ]; then
+  mkdir -p .data
+  exec flock ".data/$mode.lock" node --import tsx scripts/stack.ts "$mode" "$@"
+fi
 exec node --import tsx scripts/stack.ts "$mode" "$@"

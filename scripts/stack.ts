@@ -113,10 +113,17 @@ async function main(): Promise<void> {
   };
 
   log(`starting fake SMTP (127.0.0.1:${ports.smtp}) and S3 (127.0.0.1:${ports.s3})`);
-  await startLongRunning("services", process.execPath, ["--import", "tsx", "scripts/services.ts"], env, /services ready/);
+  await startLongRunning("services", process.execPath, ["scripts/services.mjs"], env, /services ready/);
 
   log("migrating the database");
   await migrateAndSeed({ url: pgHandle.url, seedDemo: mode === "start" });
+
+  const argv = process.argv.slice(3);
+  const needsApp = mode !== "test" || !argv.includes("--suites") || /integration|browser/.test(argv[argv.indexOf("--suites") + 1] ?? "");
+  if (!needsApp) {
+    const ok = await runTestSuites({ env, origin, root, argv });
+    return stopAll(ok ? 0 : 1);
+  }
 
   log("building the app (next build)");
   const buildCode = await run(path.join(root, "node_modules/.bin/next"), ["build"], { ...env, NODE_ENV: "production" });
@@ -138,7 +145,7 @@ async function main(): Promise<void> {
     return; // serve until Ctrl-C
   }
   if (mode === "test") {
-    const ok = await runTestSuites({ env, origin, root });
+    const ok = await runTestSuites({ env, origin, root, argv });
     return stopAll(ok ? 0 : 1);
   }
   if (mode === "bench") {

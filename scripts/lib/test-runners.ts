@@ -30,26 +30,52 @@ function readPlaywright(file: string): Counts | undefined {
   return { passed: j.stats.expected + j.stats.flaky, failed: j.stats.unexpected, skipped: j.stats.skipped };
 }
 
-export async function runTestSuites(opts: { env: NodeJS.ProcessEnv; origin: string; root: string }): Promise<boolean> {
+/**
+ * `npm test` runs everything. While developing, narrow it:
+ *   npm test -- --suites integration,browser --filter auth
+ * (--filter is passed to vitest as a file filter and to Playwright as one).
+ */
+function parseArgs(argv: string[]): { suites: Set<string>; filter: string[] } {
+  const all = ["typecheck", "unit", "spice", "integration", "browser"];
+  let suites = new Set(all);
+  const filter: string[] = [];
+  for (let i = 0; i < argv.length; i++) {
+    if (argv[i] === "--suites") suites = new Set((argv[++i] ?? "").split(","));
+    else if (argv[i] === "--filter") filter.push(argv[++i] ?? "");
+  }
+  return { suites, filter };
+}
+
+export async function runTestSuites(opts: { env: NodeJS.ProcessEnv; origin: string; root: string; argv: string[] }): Promise<boolean> {
+  const { suites: wanted, filter } = parseArgs(opts.argv);
   const out = path.join(opts.root, ".data", "test", "reports");
   fs.mkdirSync(out, { recursive: true });
   const vitest = path.join(opts.root, "node_modules/.bin/vitest");
   const env: NodeJS.ProcessEnv = { ...opts.env, NODE_ENV: "test" };
   const suites: { name: string; code: number; counts?: Counts }[] = [];
 
-  for (const project of ["unit", "spice", "integration"]) {
+  if (wanted.has("typecheck")) {
+    console.log("\n=== typecheck (tsc --noEmit) ===");
+    const code = await runTool(opts.root, path.join(opts.root, "node_modules/.bin/tsc"), ["--noEmit", "-p", "."], env);
+    console.log(code === 0 ? "typecheck: no errors" : "typecheck: errors above");
+    suites.push({ name: "typecheck", code, counts: { passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0 } });
+  }
+
+  for (const project of ["unit", "spice", "integration"].filter((p) => wanted.has(p))) {
     const file = path.join(out, `vitest-${project}.json`);
     fs.rmSync(file, { force: true });
     console.log(`\n=== vitest: ${project} ===`);
-    const code = await runTool(opts.root, vitest, ["run", "--project", project, "--reporter=default", "--reporter=json", `--outputFile.json=${file}`], env);
+    const code = await runTool(opts.root, vitest, ["run", "--project", project, "--passWithNoTests", "--reporter=default", "--reporter=json", `--outputFile.json=${file}`, ...filter], env);
     suites.push({ name: `vitest ${project}`, code, counts: readVitest(file) });
   }
 
-  const pwFile = path.join(out, "playwright.json");
-  fs.rmSync(pwFile, { force: true });
-  console.log("\n=== playwright (chromium) ===");
-  const pwCode = await runTool(opts.root, path.join(opts.root, "node_modules/.bin/playwright"), ["test"], { ...env, PLAYWRIGHT_JSON_OUTPUT_NAME: pwFile });
-  suites.push({ name: "playwright", code: pwCode, counts: readPlaywright(pwFile) });
+  if (wanted.has("browser")) {
+    const pwFile = path.join(out, "playwright.json");
+    fs.rmSync(pwFile, { force: true });
+    console.log("\n=== playwright (chromium) ===");
+    const pwCode = await runTool(opts.root, path.join(opts.root, "node_modules/.bin/playwright"), ["test", "--pass-with-no-tests", ...filter], { ...env, PLAYWRIGHT_JSON_OUTPUT_NAME: pwFile });
+    suites.push({ name: "playwright", code: pwCode, counts: readPlaywright(pwFile) });
+  }
 
   const total: Counts = { passed: 0, failed: 0, skipped: 0 };
   console.log("\n=== summary ===");

@@ -65,7 +65,7 @@ export async function runNgspice(
   const dir = await mkdtemp(path.join(tmpdir(), "heatsplit-spice-"));
   const file = path.join(dir, "circuit.cir");
   try {
-    await writeFile(file, netlist.endsWith("\n") ? netlist : `${netlist}\n`);
+    await writeFile(file, withQuit(netlist));
     const t0 = performance.now();
     const stdout = await new Promise<string>((resolve, reject) => {
       execFile(bin, ["-b", file], { cwd: dir, timeout: timeoutMs, maxBuffer: 64 << 20 }, (err, out, errOut) => {
@@ -96,6 +96,14 @@ export function valueOf(result: NgspiceResult, name: string): number {
 export function sp(x: number): string {
   if (!Number.isFinite(x)) throw new Error(`non-finite netlist value ${x}`);
   return x.toExponential(9);
+}
+
+// Without `quit` at the end of the control block, `ngspice -b` exits with 1
+// ("no simulations run") even when every measurement succeeded.
+function withQuit(netlist: string): string {
+  const text = netlist.endsWith("\n") ? netlist : `${netlist}\n`;
+  if (/^\s*quit\b/im.test(text)) return text;
+  return text.replace(/^\.endc\b/im, "quit\n.endc");
 }
 
 function tail(s: string, lines = 25): string {

@@ -2,6 +2,7 @@
 // - an SMTP server (smtp-server) that keeps every message it receives in the
 //   dev_mailbox table, where the app's development inbox page reads it;
 // - an S3-compatible object store (s3rver) with the uploads bucket.
+// Plain JavaScript on purpose: s3rver's dependency chain breaks under tsx.
 // Started by scripts/stack.ts; prints "services ready" once both listen.
 import { SMTPServer } from "smtp-server";
 import { simpleParser } from "mailparser";
@@ -11,8 +12,8 @@ import fs from "node:fs";
 
 const smtpPort = Number(process.env.FAKE_SMTP_PORT);
 const s3Port = Number(process.env.FAKE_S3_PORT);
-const s3Dir = process.env.FAKE_S3_DIR!;
-const bucket = process.env.S3_BUCKET!;
+const s3Dir = process.env.FAKE_S3_DIR;
+const bucket = process.env.S3_BUCKET;
 const pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
 
 const smtp = new SMTPServer({
@@ -30,14 +31,14 @@ const smtp = new SMTPServer({
         );
         callback();
       })
-      .catch((err: Error) => {
+      .catch((err) => {
         console.error("fake smtp: could not store message:", err.message);
         callback(new Error("mailbox unavailable"));
       });
   },
 });
 
-async function main(): Promise<void> {
+async function main() {
   fs.mkdirSync(s3Dir, { recursive: true });
   const s3 = new S3rver({
     port: s3Port,
@@ -47,14 +48,14 @@ async function main(): Promise<void> {
     configureBuckets: [{ name: bucket, configs: [] }],
   });
   await s3.run();
-  await new Promise<void>((resolve, reject) => {
+  await new Promise((resolve, reject) => {
     smtp.once("error", reject);
     smtp.listen(smtpPort, "127.0.0.1", () => resolve());
   });
   console.log(`services ready: smtp 127.0.0.1:${smtpPort}, s3 127.0.0.1:${s3Port}`);
 
   const stop = async () => {
-    await new Promise<void>((r) => smtp.close(() => r()));
+    await new Promise((r) => smtp.close(() => r()));
     await s3.close();
     await pool.end();
     process.exit(0);
@@ -63,7 +64,7 @@ async function main(): Promise<void> {
   process.on("SIGTERM", stop);
 }
 
-main().catch((e: Error) => {
+main().catch((e) => {
   console.error("services failed:", e.message);
   process.exit(1);
 });

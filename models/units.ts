@@ -1,0 +1,217 @@
+/**
+ * Quantities at the edge of the model: unit strings in, SI numbers out.
+ *
+ * Inside `models/` every number is SI (C, V, A, Ω, F, Hz, s, W, J, K/W),
+ * with one deliberate exception: absolute temperatures stay in °C because
+ * datasheets, derating policies and reviewers all speak °C. Temperature
+ * *differences* (margins, rises) are in K, which has the same size as a
+ * degree Celsius, so `tj - ambient` is a rise in K without conversion.
+ * Thermal resistance is K/W; "°C/W" is accepted as the same unit, and a
+ * `temperatureDifference` ("25 K" or "25 °C") is read as a size in K.
+ *
+ * Strings are parsed by mathjs `unit()` (only the unit machinery is loaded
+ * through `create`, so the browser bundle does not carry all of mathjs).
+ * Ratios ("0.45", "45 %") and costs ("1.20 USD", "$1.20") have no mathjs
+ * unit and are parsed here.
+ */
+import { create, unitDependencies } from "mathjs";
+import { z } from "zod";
+
+const { unit } = create({ unitDependencies });
+
+export type Dimension =
+  | "charge"
+  | "voltage"
+  | "current"
+  | "resistance"
+  | "capacitance"
+  | "inductance"
+  | "frequency"
+  | "time"
+  | "temperature"
+  | "temperatureDifference"
+  | "power"
+  | "energy"
+  | "thermalResistance"
+  | "ratio"
+  | "cost";
+
+interface DimensionInfo {
+  /** mathjs unit the SI number is read in; null for ratio and cost. */
+  si: string | null;
+  /** Symbol used for display. */
+  symbol: string;
+  /** Example shown in error messages and the JSON schema. */
+  example: string;
+  /** Article + noun for messages ("a charge"). */
+  noun: string;
+  /**
+   * Plausibility bounds in SI. They keep absurd inputs (1e300 V) out of the
+   * model so every product of inputs stays a finite double; they are far
+   * wider than any gate-drive design needs.
+   */
+  min: number;
+  max: number;
+}
+
+export const DIMENSIONS: Record<Dimension, DimensionInfo> = {
+  charge: { si: "C", symbol: "C", example: "47 nC", noun: "a charge", min: 0, max: 1e-2 },
+  voltage: { si: "V", symbol: "V", example: "12 V", noun: "a voltage", min: -1e4, max: 1e4 },
+  current: { si: "A", symbol: "A", example: "2 A", noun: "a current", min: -1e4, max: 1e4 },
+  resistance: { si: "ohm", symbol: "Ω", example: "4.7 Ω", noun: "a resistance", min: 0, max: 1e9 },
+  capacitance: { si: "F", symbol: "F", example: "2.2 nF", noun: "a capacitance", min: 0, max: 1 },
+  inductance: { si: "H", symbol: "H", example: "200 µH", noun: "an inductance", min: 0, max: 1e3 },
+  frequency: { si: "Hz", symbol: "Hz", example: "250 kHz", noun: "a frequency", min: 0, max: 1e9 },
+  time: { si: "s", symbol: "s", example: "50 ns", noun: "a time", min: 0, max: 1e3 },
+  temperature: { si: "degC", symbol: "°C", example: "85 °C", noun: "a temperature", min: -273.15, max: 1000 },
+  temperatureDifference: { si: "K", symbol: "K", example: "25 K", noun: "a temperature difference", min: -1000, max: 1000 },
+  power: { si: "W", symbol: "W", example: "1.5 W", noun: "a power", min: 0, max: 1e6 },
+  energy: { si: "J", symbol: "J", example: "3 µJ", noun: "an energy", min: 0, max: 1e3 },
+  thermalResistance: { si: "K/W", symbol: "K/W", example: "12 K/W", noun: "a thermal resistance", min: 0, max: 1e5 },
+  ratio: { si: null, symbol: "", example: "0.45 or 45 %", noun: "a ratio", min: -1e6, max: 1e6 },
+  cost: { si: null, symbol: "USD", example: "0.35 USD", noun: "a cost", min: 0, max: 1e7 },
+};
+
+export class QuantityError extends Error {}
+
+/** Spellings people type that mathjs does not know. */
+function normalise(text: string): string {
+  return text
+    .trim()
+    .replace(/[µμ]/g, "u")
+    .replace(/mΩ/g, "mohm")
+    .replace(/kΩ/g, "kohm")
+    .replace(/MΩ/g, "Mohm")
+    .replace(/[ΩΩ]/g, "ohm")
+    .replace(/°\s*C/g, "degC")
+    .replace(/°\s*F/g, "degF")
+    .replace(/℃/g, "degC")
+    .replace(/−/g, "-");
+}
+
+const NUMBER = String.raw`[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?`;
+const RATIO_RE = new RegExp(`^(${NUMBER})\\s*(%)?$`);
+const COST_RE = new RegExp(`^(?:\\$|USD)?\\s*(${NUMBER})\\s*(?:USD)?$`, "i");
+
+function describeGot(value: unknown): string {
+  return typeof value === "string" ? JSON.stringify(value) : String(value);
+}
+
+function expectedMessage(dim: Dimension, got: unknown): string {
+  const info = DIMENSIONS[dim];
+  return `expected ${info.noun} (e.g. "${info.example}"), got ${describeGot(got)}`;
+}
+
+function checkRange(si: number, dim: Dimension, got: unknown): number {
+  const info = DIMENSIONS[dim];
+  if (!Number.isFinite(si)) throw new QuantityError(expectedMessage(dim, got));
+  if (si < info.min || si > info.max) {
+    throw new QuantityError(
+      `${info.noun.replace(/^an? /, "")} out of the plausible range ` +
+        `${formatQuantity(info.min, dim)} … ${formatQuantity(info.max, dim)}, got ${describeGot(got)}`,
+    );
+  }
+  return si;
+}
+
+/**
+ * A number is taken as already SI (°C for temperature); a string is parsed
+ * with its unit and converted. Throws QuantityError with a plain message.
+ */
+export function parseQuantity(value: string | number, dim: Dimension): number {
+  if (typeof value === "number") return checkRange(value, dim, value);
+  if (typeof value !== "string") throw new QuantityError(expectedMessage(dim, value));
+  const text = normalise(value);
+  if (dim === "ratio") {
+    const m = RATIO_RE.exec(text);
+    if (!m) throw new QuantityError(expectedMessage(dim, value));
+    return checkRange(Number(m[1]) / (m[2] ? 100 : 1), dim, value);
+  }
+  if (dim === "cost") {
+    const m = COST_RE.exec(text);
+    if (!m) throw new QuantityError(expectedMessage(dim, value));
+    return checkRange(Number(m[1]), dim, value);
+  }
+  const si = DIMENSIONS[dim].si as string;
+  // A bare number in a string is refused: "47" could be C or nC.
+  if (text === "" || RATIO_RE.test(text)) throw new QuantityError(expectedMessage(dim, value));
+  let parsed: ReturnType<typeof unit>;
+  try {
+    // A difference or a per-watt figure in °C is the same size as in K; mathjs
+    // would otherwise add the 273.15 K offset to "25 degC".
+    const kelvinLike = dim === "thermalResistance" || dim === "temperatureDifference";
+    parsed = unit(kelvinLike ? text.replace(/degC/g, "K") : text);
+  } catch {
+    throw new QuantityError(expectedMessage(dim, value));
+  }
+  if (!parsed.equalBase(unit(si))) throw new QuantityError(expectedMessage(dim, value));
+  return checkRange(parsed.toNumber(si), dim, value);
+}
+
+export interface QtyOptions {
+  /** Inclusive lower bound in SI. */
+  min?: number;
+  /** Exclusive lower bound in SI (e.g. a frequency must be > 0). */
+  gt?: number;
+  max?: number;
+}
+
+/**
+ * zod field for a quantity: a number (SI) or a unit string. The output is
+ * always an SI number. The JSON schema (io: "input") shows both forms.
+ */
+export function qty(dim: Dimension, opts: QtyOptions = {}) {
+  const info = DIMENSIONS[dim];
+  const input = z.union([z.number(), z.string()]).meta({
+    description: `${info.noun.replace(/^an? /, "")}: a number in SI${info.symbol ? ` (${info.symbol})` : ""} or a string with a unit, e.g. "${info.example}"`,
+  });
+  return input.transform((raw, ctx) => {
+    let si: number;
+    try {
+      si = parseQuantity(raw, dim);
+    } catch (e) {
+      ctx.issues.push({ code: "custom", message: (e as Error).message, input: raw });
+      return z.NEVER;
+    }
+    const bad =
+      (opts.min !== undefined && si < opts.min) ||
+      (opts.gt !== undefined && si <= opts.gt) ||
+      (opts.max !== undefined && si > opts.max);
+    if (bad) {
+      const parts: string[] = [];
+      if (opts.gt !== undefined) parts.push(`above ${formatQuantity(opts.gt, dim)}`);
+      if (opts.min !== undefined) parts.push(`at least ${formatQuantity(opts.min, dim)}`);
+      if (opts.max !== undefined) parts.push(`at most ${formatQuantity(opts.max, dim)}`);
+      ctx.issues.push({ code: "custom", message: `must be ${parts.join(" and ")}, got ${describeGot(raw)}`, input: raw });
+      return z.NEVER;
+    }
+    return si;
+  });
+}
+
+const PREFIXES: [number, string][] = [
+  [1e9, "G"], [1e6, "M"], [1e3, "k"], [1, ""], [1e-3, "m"], [1e-6, "µ"], [1e-9, "n"], [1e-12, "p"], [1e-15, "f"],
+];
+
+function trimNumber(x: number, digits: number): string {
+  return String(Number(x.toPrecision(digits)));
+}
+
+/** Display an SI number with an SI prefix: 4.7e-8 C -> "47 nC". */
+export function formatQuantity(si: number, dim: Dimension, digits = 3): string {
+  if (!Number.isFinite(si)) return "—";
+  const info = DIMENSIONS[dim];
+  if (dim === "ratio") return trimNumber(si, digits);
+  if (dim === "cost") return `${si.toFixed(2)} USD`;
+  if (dim === "temperature") return `${trimNumber(si, digits)} °C`;
+  if (dim === "thermalResistance") return `${trimNumber(si, digits)} K/W`;
+  if (dim === "temperatureDifference") return `${trimNumber(si, digits)} K`;
+  if (si === 0) return `0 ${info.symbol}`;
+  const abs = Math.abs(si);
+  for (const [scale, prefix] of PREFIXES) {
+    // Round first so 999.96 shows as "1 k", not "1000".
+    const rounded = Number((abs / scale).toPrecision(digits));
+    if (rounded >= 1 && rounded < 1000) return `${trimNumber(si / scale, digits)} ${prefix}${info.symbol}`;
+  }
+  return `${si.toExponential(digits - 1)} ${info.symbol}`;
+}
