@@ -42,6 +42,7 @@ describe("formatSi", () => {
 
   it("never prefixes temperatures, kelvin differences and thermal resistances", () => {
     expect(fmt(1500, "K")).toBe("1500 K");
+    expect(fmt(1549, "K", 2)).toBe("1500 K");
     expect(fmt(0.45, "K/W")).toBe("0.45 K/W");
     expect(fmt(0.0123, "°C")).toBe("0.0123 °C");
     expect(fmt(62.5, "°C/W")).toBe("62.5 °C/W");
