@@ -1,6 +1,6 @@
 // One typed error for everything the app refuses on purpose. The code maps
 // to an HTTP status and a user-facing message; causes are logged, never shown.
-export type AppErrorCode = "bad_request" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "too_many_requests" | "payload_too_large" | "unsupported_media_type" | "unavailable";
+export type AppErrorCode = "bad_request" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "too_many_requests" | "payload_too_large" | "unsupported_media_type" | "unprocessable" | "unavailable";
 
 const STATUS: Record<AppErrorCode, number> = {
   bad_request: 400,
@@ -10,6 +10,7 @@ const STATUS: Record<AppErrorCode, number> = {
   conflict: 409,
   payload_too_large: 413,
   unsupported_media_type: 415,
+  unprocessable: 422,
   too_many_requests: 429,
   unavailable: 503,
 };

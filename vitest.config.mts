@@ -7,8 +7,8 @@ import path from "node:path";
 export default defineConfig({
   resolve: {
     alias: {
-      "@": path.resolve(__dirname),
-      "server-only": path.resolve(__dirname, "tests/support/server-only-stub.ts"),
+      "@": path.resolve(import.meta.dirname),
+      "server-only": path.resolve(import.meta.dirname, "tests/support/server-only-stub.ts"),
     },
   },
   test: {

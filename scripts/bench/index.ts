@@ -1,0 +1,23 @@
+// `npm run bench`: the speed figures, printed; exits non-zero when a target
+// is missed. Runs inside the bench stack (scripts/stack.ts bench), so the
+// app is up at APP_ORIGIN on its own ports with a fresh database.
+import { runModelBench } from "./model";
+import { runApiBench } from "./api";
+
+async function main(): Promise<void> {
+  const sections = [
+    { name: "model", run: runModelBench },
+    { name: "api", run: runApiBench },
+  ];
+  let ok = true;
+  for (const s of sections) {
+    console.log(`\n=== bench: ${s.name} ===`);
+    const r = await s.run();
+    for (const line of r.lines) console.log(line);
+    ok &&= r.ok;
+  }
+  console.log(ok ? "\nbench: all targets met" : "\nbench: some targets missed");
+  process.exit(ok ? 0 : 1);
+}
+
+void main();
