@@ -76,3 +76,43 @@ describe("GET /api/v1/schema", () => {
     expect((await new Client().get("/api/v1/schema")).status).toBe(401);
   });
 });
+
+describe("POST /api/v1/sweep", () => {
+  const spec = {
+    part: "controller",
+    metric: "rise",
+    x: { axis: "fsw", from: 100e3, to: 500e3, steps: 9 },
+    y: { axis: "qgScale", from: 0.5, to: 2, steps: 7 },
+  };
+  it("sweeps the controller's rise over fsw × Qg with a rising trend", async () => {
+    const r = await viewer.post("/api/v1/sweep", { design: direct, spec });
+    expect(r.status).toBe(200);
+    expect(r.text).not.toMatch(/NaN|Infinity/);
+    const s = r.json<{ z: (number | null)[][]; x: { values: number[] }; y: { values: number[] } }>();
+    expect(s.x.values).toHaveLength(9);
+    expect(s.z).toHaveLength(7);
+    // direct drive: every gate watt is the controller's, so ΔT grows with fsw and Qg
+    expect(s.z[6][8]!).toBeGreaterThan(s.z[0][0]!);
+  });
+  it("answers an unknown part or identical axes with 400", async () => {
+    const unknown = await viewer.post("/api/v1/sweep", { design: direct, spec: { ...spec, part: "Q99" } });
+    expect(unknown.status).toBe(400);
+    const same = await viewer.post("/api/v1/sweep", { design: direct, spec: { ...spec, y: spec.x } });
+    expect(same.status).toBe(400);
+    expect(same.json<{ error: { issues: { path: string }[] } }>().error.issues[0].path).toContain("spec");
+  });
+});
+
+describe("POST /api/v1/spread", () => {
+  it("gives the same percentiles for the same seed", async () => {
+    const a = await viewer.post("/api/v1/spread", { design: direct, samples: 200, seed: 42 });
+    const b = await viewer.post("/api/v1/spread", { design: direct, samples: 200, seed: 42 });
+    expect(a.status).toBe(200);
+    expect(a.text).toBe(b.text);
+  });
+  it("refuses too many samples with 400 naming the field", async () => {
+    const r = await viewer.post("/api/v1/spread", { design: direct, samples: 10_000_000, seed: 1 });
+    expect(r.status).toBe(400);
+    expect(r.json<{ error: { issues: { path: string }[] } }>().error.issues[0].path).toContain("samples");
+  });
+});

@@ -1,0 +1,45 @@
+import { loadInWorkspace, route } from "@/app/_lib/access";
+import { AppError } from "@/app/_lib/errors";
+import { validatePartDraft, flattenParams } from "@/app/_lib/partValues";
+import { removeObjectQuietly } from "@/app/_lib/datasheets";
+import { partParamsSchema, partPatchSchema } from "@/app/(workspace)/parts/schema";
+import { deletePartById, getPartById, updatePartById } from "@/db/queries/parts";
+import { deleteStoredFileById } from "@/db/queries/files";
+import { getDb } from "@/db/knex";
+
+// GET /api/v1/parts/:partId -> { part }
+export const GET = route({ permission: "read", params: partParamsSchema }, async ({ member, params }) => {
+  const part = await loadInWorkspace(member, (workspaceId) => getPartById({ workspaceId, id: params.partId }));
+  return { part };
+});
+
+// PATCH /api/v1/parts/:partId { any field of POST } -> { part }
+// Given params replace the stored ones and are checked, with the kind, as a whole.
+export const PATCH = route({ permission: "part:write", params: partParamsSchema, body: partPatchSchema }, async ({ member, params, body }) => {
+  const current = await loadInWorkspace(member, (workspaceId) => getPartById({ workspaceId, id: params.partId }));
+  const r = validatePartDraft({
+    kind: body.kind ?? current.kind,
+    manufacturer: body.manufacturer ?? current.manufacturer,
+    mpn: body.mpn ?? current.mpn,
+    description: body.description ?? current.description,
+    unitCost: body.unitCost === undefined ? current.unitCost : body.unitCost,
+    params: flattenParams(body.params ?? current.params),
+    tolerance: body.tolerance ?? current.tolerance,
+  });
+  if (!r.ok) throw new AppError("bad_request", "Check the request body.", r.issues);
+  const part = await updatePartById({ workspaceId: member.workspace.id, id: current.id, values: r.value });
+  if (!part) throw new AppError("not_found", "Not found.");
+  return { part };
+});
+
+// DELETE /api/v1/parts/:partId -> 204 (its datasheet goes with it)
+export const DELETE = route({ permission: "part:write", params: partParamsSchema }, async ({ member, params }) => {
+  const workspaceId = member.workspace.id;
+  const objectKey = await getDb().transaction(async (trx) => {
+    const gone = await deletePartById({ workspaceId, id: params.partId }, trx);
+    if (!gone) throw new AppError("not_found", "Not found.");
+    return gone.datasheetFileId ? deleteStoredFileById({ workspaceId, id: gone.datasheetFileId }, trx) : null;
+  });
+  if (objectKey) await removeObjectQuietly(objectKey);
+  return undefined;
+});

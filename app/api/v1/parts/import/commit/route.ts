@@ -1,0 +1,10 @@
+import { route } from "@/app/_lib/access";
+import { commitPartsImport, readCsvUpload } from "@/app/_lib/partImport";
+
+// POST /api/v1/parts/import/commit  (the same file as the preview)
+//   -> { created, updated }; any problem -> 400 listing every one, nothing written.
+// Re-importing a file updates parts by (workspace, mpn) instead of duplicating them.
+export const POST = route({ permission: "part:write" }, async ({ member, req }) => {
+  const text = await readCsvUpload(req);
+  return commitPartsImport({ workspaceId: member.workspace.id, userId: member.user.id, text });
+});

@@ -1,0 +1,10 @@
+import { route } from "@/app/_lib/access";
+import { previewPartsImport, readCsvUpload } from "@/app/_lib/partImport";
+
+// POST /api/v1/parts/import/preview  (body: text/csv, or multipart field "file")
+//   -> { total, valid, create, update, issues: [{ row, column, message }], rows }
+// Validates every row; writes nothing.
+export const POST = route({ permission: "part:write" }, async ({ member, req }) => {
+  const text = await readCsvUpload(req);
+  return previewPartsImport({ workspaceId: member.workspace.id, text });
+});

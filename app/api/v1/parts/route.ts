@@ -1,0 +1,16 @@
+import { reply, route } from "@/app/_lib/access";
+import { partBodySchema, partListQuerySchema } from "@/app/(workspace)/parts/schema";
+import { insertPart, listPartsByWorkspace } from "@/db/queries/parts";
+
+// GET /api/v1/parts?q=&kind=&param=&min=&max=&ic=&sort=&dir=&page=&pageSize=
+//   -> { items, total, page, pageSize, pageCount }
+export const GET = route({ permission: "read", query: partListQuerySchema }, async ({ member, query }) => {
+  return listPartsByWorkspace({ workspaceId: member.workspace.id, filter: query });
+});
+
+// POST /api/v1/parts { kind, manufacturer, mpn, description?, unitCost?, params, tolerance? } -> 201 { part }
+// Quantities as unit strings ("47 nC") or SI numbers; stored as SI.
+export const POST = route({ permission: "part:write", body: partBodySchema }, async ({ member, body }) => {
+  const part = await insertPart({ workspaceId: member.workspace.id, userId: member.user.id, values: body });
+  return reply({ part }, 201);
+});
