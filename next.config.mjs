@@ -21,7 +21,9 @@ const nextConfig = {
   // Type errors are caught by the separate `tsc --noEmit` step of npm test,
   // which covers scripts and tests too.
   typescript: { ignoreBuildErrors: true },
-  serverExternalPackages: ["@node-rs/argon2", "knex", "pg", "pg-boss"],
+  serverExternalPackages: ["@node-rs/argon2", "knex", "pg", "pg-boss", "pdfkit"],
+  // forbidden() in requirePageMember (app/_lib/access.ts) renders app/forbidden.tsx with a 403.
+  experimental: { authInterrupts: true },
   async headers() {
     return [
       {
