@@ -67,7 +67,8 @@ export const cornerSchema = z
     label: z.string().max(120).optional(),
     vin: qty("voltage", { gt: 0 }),
     ambient: qty("temperature", { min: -60, max: 200 }),
-    fsw: qty("frequency", { gt: 0, max: 1e8 }),
+    /** 1 Hz … 100 MHz: outside that range the switching models mean nothing. */
+    fsw: qty("frequency", { min: 1, max: 1e8 }),
     loadFraction: qty("ratio", { min: 0, max: 10 }).default(1),
     /** Power delivered to the load (for efficiency of the modelled losses). */
     outputPower: qty("power").optional(),

@@ -59,7 +59,8 @@ export const controllerSchema = z
  */
 export const outputCapacitanceSchema = z
   .object({
-    vTest: qty("voltage", { gt: 0 }),
+    /** ≥ 1 V: the V^1.5 scaling from a lower test voltage is meaningless. */
+    vTest: qty("voltage", { min: 1 }),
     eoss: qty("energy").optional(),
     qoss: qty("charge").optional(),
     coss: qty("capacitance").optional(),
@@ -80,8 +81,8 @@ export const mosfetSchema = z
     qg: qty("charge", { gt: 0 }),
     /** Vgs at which Qg is specified. */
     vTest: qty("voltage", { gt: 0 }).default(D.qgTestVoltage),
-    vth: qty("voltage", { gt: 0 }),
-    vpl: qty("voltage", { gt: 0 }),
+    vth: qty("voltage", { min: 0.1 }),
+    vpl: qty("voltage", { min: 0.2 }),
     /** Slope of Q(Vgs) below 0 V; default Qgs/Vpl (see gateCharge.ts). */
     ciss: qty("capacitance", { gt: 0 }).optional(),
     rgInt: qty("resistance", { gt: 0 }).default(D.rgInt),
@@ -108,7 +109,7 @@ export const mosfetSchema = z
   .superRefine((m, ctx) => {
     const issue = (path: string, message: string) => ctx.addIssue({ code: "custom", path: [path], message });
     if (!(m.vth < m.vpl)) issue("vth", "Vth must be below the plateau voltage Vpl");
-    if (!(m.vpl < m.vTest)) issue("vpl", "the plateau Vpl must be below the Qg test voltage vTest");
+    if (!(m.vpl + 0.1 <= m.vTest)) issue("vpl", "the plateau Vpl must be at least 0.1 V below the Qg test voltage vTest");
     if (m.qg < m.qgs + m.qgd) issue("qg", "Qg at vTest must be at least Qgs + Qgd");
     const chain = m.rthJC !== undefined || m.rthCS !== undefined || m.rthSA !== undefined;
     if (m.rthJA === undefined && !chain) issue("rthJA", "give rthJA, or rthJC + rthCS + rthSA");

@@ -14,10 +14,11 @@
  * Ratios ("0.45", "45 %") and costs ("1.20 USD", "$1.20") have no mathjs
  * unit and are parsed here.
  */
-import { create, unitDependencies } from "mathjs";
+import { create, unitDependencies, type Unit } from "mathjs";
 import { z } from "zod";
 
-const { unit } = create({ unitDependencies });
+const math = create({ unitDependencies });
+const unit = (text: string): Unit => math.unit(text) as Unit;
 
 export type Dimension =
   | "charge"
@@ -121,6 +122,32 @@ function checkRange(si: number, dim: Dimension, got: unknown): number {
 export function parseQuantity(value: string | number, dim: Dimension): number {
   if (typeof value === "number") return checkRange(value, dim, value);
   if (typeof value !== "string") throw new QuantityError(expectedMessage(dim, value));
+  // mathjs parsing costs tens of µs; documents repeat the same strings.
+  const key = `${dim}|${value}`;
+  const hit = cache.get(key);
+  if (hit !== undefined) {
+    if (typeof hit === "number") return hit;
+    throw new QuantityError(hit.message);
+  }
+  try {
+    const si = parseString(value, dim);
+    remember(key, si);
+    return si;
+  } catch (e) {
+    if (e instanceof QuantityError) remember(key, e);
+    throw e;
+  }
+}
+
+const CACHE_LIMIT = 4096;
+const cache = new Map<string, number | QuantityError>();
+
+function remember(key: string, v: number | QuantityError): void {
+  if (cache.size >= CACHE_LIMIT) cache.clear();
+  cache.set(key, v);
+}
+
+function parseString(value: string, dim: Dimension): number {
   const text = normalise(value);
   if (dim === "ratio") {
     const m = RATIO_RE.exec(text);
@@ -135,7 +162,7 @@ export function parseQuantity(value: string | number, dim: Dimension): number {
   const si = DIMENSIONS[dim].si as string;
   // A bare number in a string is refused: "47" could be C or nC.
   if (text === "" || RATIO_RE.test(text)) throw new QuantityError(expectedMessage(dim, value));
-  let parsed: ReturnType<typeof unit>;
+  let parsed: Unit;
   try {
     // A difference or a per-watt figure in °C is the same size as in K; mathjs
     // would otherwise add the 273.15 K offset to "25 degC".
