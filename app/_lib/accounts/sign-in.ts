@@ -1,0 +1,46 @@
+import "server-only";
+import { cookies } from "next/headers";
+import { AppError } from "../errors";
+import { getLucia, SESSION_COOKIE, createSignedInSession, clearSessionCookie } from "../auth";
+import { verifyPassword } from "../passwords";
+import { assertSignInAllowed, recordSignInFailure, recordSignInSuccess } from "../throttle";
+import { getCredentialsByEmail, type UserRecord } from "@/db/queries/accounts";
+import { listMembershipsByUser } from "@/db/queries/workspaces";
+
+export const INVALID_CREDENTIALS = "E-mail or password is wrong.";
+
+/**
+ * Checks a password under the sign-in throttle. Same answer (and about the
+ * same time) for an unknown e-mail and a wrong password.
+ */
+export async function checkPassword({ email, password, address }: { email: string; password: string; address: string }): Promise<UserRecord> {
+  await assertSignInAllowed({ email, address });
+  const creds = await getCredentialsByEmail(email);
+  const ok = await verifyPassword(creds?.passwordHash ?? null, password);
+  if (!creds || !ok) {
+    await recordSignInFailure({ email, address });
+    throw new AppError("unauthenticated", INVALID_CREDENTIALS);
+  }
+  await recordSignInSuccess({ email });
+  return creds.user;
+}
+
+/** Ends the request's current session, if any, before a new one starts (no session fixation). */
+export async function endCurrentSession(): Promise<void> {
+  const current = (await cookies()).get(SESSION_COOKIE)?.value;
+  if (current) await getLucia().invalidateSession(current);
+}
+
+export async function signIn(input: { email: string; password: string; address: string }): Promise<{ user: UserRecord; workspaceId: string | null }> {
+  const user = await checkPassword(input);
+  const memberships = await listMembershipsByUser(user.id);
+  const workspaceId = memberships[0]?.workspace.id ?? null;
+  await endCurrentSession();
+  await createSignedInSession({ userId: user.id, workspaceId });
+  return { user, workspaceId };
+}
+
+export async function signOut(): Promise<void> {
+  await endCurrentSession();
+  await clearSessionCookie();
+}

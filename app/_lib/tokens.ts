@@ -1,0 +1,20 @@
+import "server-only";
+import crypto from "node:crypto";
+
+// Secrets sent by e-mail (invite and reset links) are 32 random bytes; only
+// their SHA-256 is stored, so a database leak does not hand out live links.
+const TOKEN_BYTES = 32;
+
+export function hashToken(token: string): string {
+  return crypto.createHash("sha256").update(token, "utf8").digest("hex");
+}
+
+export function createToken(): { token: string; tokenHash: string } {
+  const token = crypto.randomBytes(TOKEN_BYTES).toString("base64url");
+  return { token, tokenHash: hashToken(token) };
+}
+
+/** Record ids: a readable prefix and 80 random bits. */
+export function newId(prefix: "usr" | "ws" | "inv"): string {
+  return `${prefix}_${crypto.randomBytes(10).toString("base64url")}`;
+}

@@ -1,0 +1,9 @@
+import { publicRoute } from "@/app/_lib/access";
+import { acceptInviteSchema } from "@/app/_lib/accounts/schemas";
+import { acceptInvite } from "@/app/_lib/accounts/accept-invite";
+import { clientAddress } from "@/app/_lib/client-address";
+
+// Joins the invited workspace (creating the account if needed) and signs in to it.
+export const POST = publicRoute({ body: acceptInviteSchema }, async ({ body, member, req }) =>
+  acceptInvite(body, { signedInUserId: member?.user.id ?? null, address: clientAddress(req.headers) }),
+);

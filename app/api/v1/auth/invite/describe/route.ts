@@ -1,0 +1,7 @@
+import { publicRoute } from "@/app/_lib/access";
+import { describeInviteSchema } from "@/app/_lib/accounts/schemas";
+import { describeInvite } from "@/app/_lib/accounts/invites";
+
+// What an invitation link is for (workspace, role, whether the address has an account).
+// POST, not GET: the token travels in the body, never in a URL or a log line.
+export const POST = publicRoute({ body: describeInviteSchema }, async ({ body }) => describeInvite(body.token));

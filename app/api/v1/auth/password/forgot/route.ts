@@ -1,0 +1,9 @@
+import { publicRoute } from "@/app/_lib/access";
+import { forgotPasswordSchema } from "@/app/_lib/accounts/schemas";
+import { RESET_REQUESTED_MESSAGE, requestPasswordReset } from "@/app/_lib/accounts/password-reset";
+
+// Same answer whether or not the address has an account.
+export const POST = publicRoute({ body: forgotPasswordSchema }, async ({ body }) => {
+  await requestPasswordReset(body.email);
+  return { message: RESET_REQUESTED_MESSAGE };
+});
