@@ -4,13 +4,15 @@
  * the design point.
  *
  * Speed: at a fixed drive stage (corner, Vin, gate resistors) every loss the
- * budget assembly computes (evaluateCore.ts `computePosition`) is one of
- *   constant · 1, · fsw, · k·fsw, · 1/fsw²  (k = gate-charge scale)
- * or an overlap edge ½·Vds·Id·min(k·T, ½/fsw)·fsw (hardEdge with its cap);
+ * budget assembly computes (evaluatePosition.ts `computePosition`) is one of
+ *   constant · 1, · fsw, · k·fsw  (k = gate-charge scale)
+ * or an overlap edge ½·Vds·Id·min(k·T, ½/fsw)·fsw (hardEdge with its cap), or
+ * a gate-transformer magnetizing term min(k/fsw, Ipp,max)²/12·R;
  * only conduction needs the electro-thermal solve. So a "plan" of those
  * coefficients is built once per stage (per grid, or per row/column when
- * vin or rGate is an axis) and each cell costs a few multiply-adds plus the
- * thermal solve of the groups the metric needs, with no allocation.
+ * vin or rGate is an axis; per cell when both are, which is slower) and each
+ * cell costs a few multiply-adds plus the thermal solve of the groups the
+ * metric needs, with no allocation.
  * The plan mirrors computePosition term by term; tests/unit/sweep.test.ts
  * checks sampled cells against a full evaluateDesign of the modified design.
  */
@@ -110,17 +112,20 @@ interface Plan {
   c0: Float64Array; // × 1
   cF: Float64Array; // × fsw
   cKF: Float64Array; // × k·fsw
-  cInvF2: Float64Array; // × 1/fsw²
   edgeSlot: Int32Array; // part·NM + mechanism
   edgeW: Float64Array; // ½·Vds·Id
   edgeT: Float64Array; // (Qgs2 + Qgd)/Ig at k = 1
   edgeScaled: Uint8Array;
+  // Magnetizing ripple of a gate transformer: min(k/fsw, ippMax)²/12 · R.
+  magSlot: Int32Array;
+  magK: Float64Array;
+  magMax: Float64Array;
+  magR: Float64Array;
   condCoef: Float64Array; // per part: I_rms²/n
-  // Per-part sums of c0 / cF / cKF / cInvF2 over the mechanisms.
+  // Per-part sums of c0 / cF / cKF over the mechanisms.
   p0: Float64Array;
   pF: Float64Array;
   pKF: Float64Array;
-  pInvF2: Float64Array;
 }
 
 interface StageKnobs {
@@ -133,8 +138,9 @@ function buildPlan(prep: Prepared, ci: number, knobs: StageKnobs, scaled: (id: s
   const { design } = prep;
   const corner = design.corners[ci];
   const size = prep.parts.length * NM;
-  const c0 = new Float64Array(size), cF = new Float64Array(size), cKF = new Float64Array(size), cInvF2 = new Float64Array(size);
+  const c0 = new Float64Array(size), cF = new Float64Array(size), cKF = new Float64Array(size);
   const slots: number[] = [], ws: number[] = [], ts: number[] = [], sc: number[] = [];
+  const mSlot: number[] = [], mK: number[] = [], mMax: number[] = [], mR: number[] = [];
   const condCoef = new Float64Array(prep.parts.length);
   const part = (id: string) => {
     const i = prep.partIndex.get(id);
@@ -160,8 +166,12 @@ function buildPlan(prep: Prepared, ci: number, knobs: StageKnobs, scaled: (id: s
     for (const d of st.drops) perK[part(d.part) * NM + M[d.mechanism]] += d.volts * dq1;
     for (const f of st.fixed) c0[part(f.part) * NM + M[f.mechanism]] += f.watts;
     if (st.magnetizing) {
-      const kk = st.magnetizing.k;
-      for (const q of st.magnetizing.parts) cInvF2[part(q.part) * NM + M.gateDrive] += ((kk * kk) / 12) * q.resistance;
+      for (const q of st.magnetizing.parts) {
+        mSlot.push(part(q.part) * NM + M.gateDrive);
+        mK.push(st.magnetizing.k);
+        mMax.push(st.magnetizing.ippMax);
+        mR.push(q.resistance);
+      }
     }
     const me = pp.part * NM;
     const edge = (mech: number, vds: number, id: number, iGate: number) => {
@@ -190,17 +200,17 @@ function buildPlan(prep: Prepared, ci: number, knobs: StageKnobs, scaled: (id: s
     condCoef[pp.part] = channel ? (w.iRms * w.iRms) / n : 0;
   }
   const np = prep.parts.length;
-  const p0 = new Float64Array(np), pF = new Float64Array(np), pKF = new Float64Array(np), pInvF2 = new Float64Array(np);
+  const p0 = new Float64Array(np), pF = new Float64Array(np), pKF = new Float64Array(np);
   for (let i = 0; i < np; i++)
     for (let k = 0; k < NM; k++) {
       p0[i] += c0[i * NM + k];
       pF[i] += cF[i * NM + k];
       pKF[i] += cKF[i * NM + k];
-      pInvF2[i] += cInvF2[i * NM + k];
     }
   return {
-    c0, cF, cKF, cInvF2, edgeSlot: Int32Array.from(slots), edgeW: Float64Array.from(ws), edgeT: Float64Array.from(ts),
-    edgeScaled: Uint8Array.from(sc), condCoef, p0, pF, pKF, pInvF2,
+    c0, cF, cKF, edgeSlot: Int32Array.from(slots), edgeW: Float64Array.from(ws), edgeT: Float64Array.from(ts),
+    edgeScaled: Uint8Array.from(sc), magSlot: Int32Array.from(mSlot), magK: Float64Array.from(mK),
+    magMax: Float64Array.from(mMax), magR: Float64Array.from(mR), condCoef, p0, pF, pKF,
   };
 }
 
@@ -212,6 +222,16 @@ interface GroupWork {
   out: Float64Array;
   problem: NetworkProblem;
   scratch: NetworkScratch;
+  /**
+   * Every MOSFET in the group has the linear Rds(on)(T) fit: losses are affine
+   * in T, so the fixed point is one linear solve (see solveAffine).
+   */
+  affine: boolean;
+  theta: Float64Array;
+  r25: Float64Array; // per node, 0 for non-MOSFETs
+  slope: Float64Array; // dRds/dT of the linear fit
+  A: Float64Array;
+  rhs: Float64Array;
 }
 
 function groupWork(prep: Prepared, gi: number): GroupWork {
@@ -227,7 +247,56 @@ function groupWork(prep: Prepared, gi: number): GroupWork {
     lossAt: (i, t) => { const m = models[i]; return base[i] + (m ? coef[i] * rdsAt(m, t) : 0); },
     slopeAt: (i, t) => { const m = models[i]; return m ? coef[i] * rdsSlope(m, t) : 0; },
   };
-  return { nodes: g.nodes, base, coef, out: new Float64Array(n), problem, scratch: networkScratch(n) };
+  const r25 = new Float64Array(n), slope = new Float64Array(n);
+  models.forEach((m, i) => {
+    if (!m) return;
+    r25[i] = m.rds25;
+    slope[i] = rdsSlope(m, 25);
+  });
+  return {
+    nodes: g.nodes, base, coef, out: new Float64Array(n), problem, scratch: networkScratch(n),
+    affine: models.every((m) => !m || m.rdsModel === "linear"), theta: Float64Array.from(g.theta), r25, slope,
+    A: new Float64Array(n * n), rhs: new Float64Array(n),
+  };
+}
+
+/**
+ * Fixed point T = Ta + Θ·P(T) with P_i = base_i + coef_i·(R25_i + s_i·(T_i − 25)):
+ * (I − Θ·diag(coef·s))·T = Ta + Θ·(base + coef·(R25 − 25·s)). Gaussian elimination
+ * without pivoting on the same matrix as thermal.ts's Newton Jacobian, with the same
+ * runaway rule (a pivot ≤ 1e-12 means loop gain ≥ 1). Returns 1 solved, 0 runaway,
+ * −1 when the Rds floor of conduction.ts would bind (caller falls back to solveNetwork).
+ */
+function solveAffine(G: GroupWork, ambient: number): number {
+  const n = G.nodes.length;
+  const { A, rhs, theta, base, coef, r25, slope, out } = G;
+  for (let i = 0; i < n; i++) {
+    let r = ambient;
+    for (let j = 0; j < n; j++) {
+      const t = theta[i * n + j];
+      r += t * (base[j] + coef[j] * (r25[j] - 25 * slope[j]));
+      A[i * n + j] = (i === j ? 1 : 0) - t * coef[j] * slope[j];
+    }
+    rhs[i] = r;
+  }
+  for (let k = 0; k < n; k++) {
+    const piv = A[k * n + k];
+    if (!(piv > 1e-12)) return 0;
+    for (let i = k + 1; i < n; i++) {
+      const f = A[i * n + k] / piv;
+      if (f === 0) continue;
+      for (let j = k; j < n; j++) A[i * n + j] -= f * A[k * n + j];
+      rhs[i] -= f * rhs[k];
+    }
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    let v = rhs[i];
+    for (let j = i + 1; j < n; j++) v -= A[i * n + j] * out[j];
+    out[i] = v / A[i * n + i];
+    if (!Number.isFinite(out[i])) return 0;
+  }
+  for (let i = 0; i < n; i++) if (r25[i] > 0 && !(r25[i] + slope[i] * (out[i] - 25) > 0.1 * r25[i])) return -1;
+  return 1;
 }
 
 /** Everything one cell needs, allocated once per sweep. */
@@ -243,7 +312,8 @@ interface Kernel {
   node: number;
   /** Parts whose losses the metric reads (thermal-group nodes, the metric part; all for "all"). */
   needed: Int32Array;
-  loss: Float64Array; // per part, non-conduction loss of the current cell
+  neededMask: Uint8Array;
+  loss: Float64Array; // per part, non-conduction loss of the current cell (needed parts only)
 }
 
 function makeKernel(prep: Prepared, metric: SweepMetric, part: number, mech: number): Kernel {
@@ -256,27 +326,41 @@ function makeKernel(prep: Prepared, metric: SweepMetric, part: number, mech: num
   const needed = new Set<number>(groups.flatMap((g) => g.nodes));
   if (part >= 0) needed.add(part);
   else for (let i = 0; i < np; i++) needed.add(i);
-  return { prep, metric, part, mech, groups, node, needed: Int32Array.from([...needed].sort((a, b) => a - b)), loss: new Float64Array(np) };
+  const neededMask = new Uint8Array(np);
+  for (const i of needed) neededMask[i] = 1;
+  return {
+    prep, metric, part, mech, groups, node, needed: Int32Array.from([...needed].sort((a, b) => a - b)), neededMask,
+    loss: new Float64Array(np),
+  };
 }
 
 /** One cell; NaN stands for runaway inside the loop (null at the edge of the module). */
 function cell(K: Kernel, plan: Plan, fsw: number, k: number, ambient: number): number {
   const { loss, needed } = K;
-  const invF2 = 1 / (fsw * fsw);
   const kf = k * fsw;
   for (let n = 0; n < needed.length; n++) {
     const i = needed[n];
-    loss[i] = plan.p0[i] + plan.pF[i] * fsw + plan.pKF[i] * kf + plan.pInvF2[i] * invF2;
+    loss[i] = plan.p0[i] + plan.pF[i] * fsw + plan.pKF[i] * kf;
   }
   const maxT = MAX_EDGE_FRACTION_OF_PERIOD / Math.max(fsw, 1e-9);
-  let mechEdges = 0;
+  let mechExtra = 0;
+  for (let e = 0; e < plan.magSlot.length; e++) {
+    const owner = (plan.magSlot[e] / NM) | 0;
+    if (!K.neededMask[owner]) continue;
+    const a = plan.magK[e] / fsw;
+    const ipp = a < plan.magMax[e] ? a : plan.magMax[e];
+    const p = ((ipp * ipp) / 12) * plan.magR[e];
+    loss[owner] += p;
+    if (plan.magSlot[e] === K.mech) mechExtra += p;
+  }
   const slots = plan.edgeSlot;
   for (let e = 0; e < slots.length; e++) {
+    const owner = (slots[e] / NM) | 0;
+    if (!K.neededMask[owner]) continue;
     const t = (plan.edgeScaled[e] ? k : 1) * plan.edgeT[e];
     const p = plan.edgeW[e] * (t < maxT ? t : maxT) * fsw;
-    // Edges of parts the metric does not read land in unused entries: harmless.
-    loss[(slots[e] / NM) | 0] += p;
-    if (slots[e] === K.mech) mechEdges += p;
+    loss[owner] += p;
+    if (slots[e] === K.mech) mechExtra += p;
   }
   const groups = K.groups;
   for (let g = 0; g < groups.length; g++) {
@@ -286,8 +370,12 @@ function cell(K: Kernel, plan: Plan, fsw: number, k: number, ambient: number): n
       G.base[i] = loss[nodes[i]];
       G.coef[i] = plan.condCoef[nodes[i]];
     }
-    G.problem.ambient = ambient;
-    if (!solveNetwork(G.problem, G.out, G.scratch)) return Number.NaN;
+    const fast = G.affine ? solveAffine(G, ambient) : -1;
+    if (fast === 0) return Number.NaN;
+    if (fast < 0) {
+      G.problem.ambient = ambient;
+      if (!solveNetwork(G.problem, G.out, G.scratch)) return Number.NaN;
+    }
   }
   if (K.metric === "rise") return groups[0].out[K.node] - ambient;
   if (K.metric === "tj") return groups[0].out[K.node];
@@ -301,7 +389,7 @@ function cell(K: Kernel, plan: Plan, fsw: number, k: number, ambient: number): n
   if (K.mech < 0) return loss[K.part] + condHere;
   if (K.mech === K.part * NM + M.conduction) return condHere;
   const s = K.mech;
-  return plan.c0[s] + plan.cF[s] * fsw + plan.cKF[s] * kf + plan.cInvF2[s] * invF2 + mechEdges;
+  return plan.c0[s] + plan.cF[s] * fsw + plan.cKF[s] * kf + mechExtra;
 }
 
 function conduction(K: Kernel, plan: Plan, G: GroupWork, i: number): number {

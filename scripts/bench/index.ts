@@ -3,11 +3,13 @@
 // app is up at APP_ORIGIN on its own ports with a fresh database.
 import { runModelBench } from "./model";
 import { runApiBench } from "./api";
+import { runPageBench } from "./pages";
 
 async function main(): Promise<void> {
   const sections = [
     { name: "model", run: runModelBench },
     { name: "api", run: runApiBench },
+    { name: "pages", run: runPageBench },
   ];
   let ok = true;
   for (const s of sections) {

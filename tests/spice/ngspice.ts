@@ -17,10 +17,10 @@ export interface NgspiceResult {
 
 const CANDIDATES = ["/usr/bin/ngspice", "/usr/local/bin/ngspice"];
 
-/** Path of the ngspice binary, or null. `NGSPICE` overrides the search. */
+/** Path of the ngspice binary, or null. `NGSPICE`, when set, is the only place looked at. */
 export function findNgspice(): string | null {
   const fromEnv = process.env.NGSPICE;
-  if (fromEnv && existsSync(fromEnv)) return fromEnv;
+  if (fromEnv) return existsSync(fromEnv) ? fromEnv : null;
   for (const c of CANDIDATES) if (existsSync(c)) return c;
   for (const dir of (process.env.PATH ?? "").split(path.delimiter)) {
     const p = path.join(dir, "ngspice");
@@ -49,7 +49,7 @@ export function parseValues(stdout: string): Record<string, number> {
 }
 
 // Messages after which a number in the output cannot be trusted.
-const FATAL = [/timestep too small/i, /simulation\(s\) aborted/i, /\bfailed!/i, /no such vector/i, /singular matrix/i];
+const FATAL = [/timestep too small/i, /simulation\(s\) aborted/i, /\bfailed!/i, /no such vector/i, /singular matrix/i, /syntax error/i, /Error: RHS/];
 
 export async function runNgspice(
   netlist: string,
