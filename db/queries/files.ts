@@ -5,7 +5,7 @@ import { getDb } from "@/db/knex";
 
 // stored_file rows: the metadata of an object in the bucket. Every lookup
 // takes the workspace id, so another workspace's file is simply not found.
-export type StoredFileKind = "datasheet" | "bench";
+export type StoredFileKind = "datasheet" | "bench" | "report";
 
 export interface StoredFileRecord {
   id: string;

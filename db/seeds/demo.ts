@@ -5,6 +5,8 @@
 import type { Knex } from "knex";
 import { hash } from "@node-rs/argon2";
 import users from "./demo-users.json";
+import { seedDemoParts } from "./demo-parts";
+import { seedDemoProjects } from "./demo-projects";
 
 export const DEMO_WORKSPACE_ID = "ws_tallowbrook";
 export const DEMO_PASSWORD = "heatsplit-demo";
@@ -27,6 +29,8 @@ export async function seedDemoWorkspace(knex: Knex): Promise<string> {
         added++;
       }
     }
+    added += await seedDemoParts(trx, DEMO_WORKSPACE_ID);
+    added += await seedDemoProjects(trx, DEMO_WORKSPACE_ID);
   });
   return added ? `${added} records added` : "already present, nothing added";
 }

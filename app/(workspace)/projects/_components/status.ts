@@ -1,0 +1,10 @@
+import type { BadgeTone } from "@/components/ui";
+import type { ProjectStatus } from "../schema";
+
+export const STATUS_TONES: Record<ProjectStatus, BadgeTone> = {
+  concept: "neutral",
+  design: "info",
+  review: "copper",
+  released: "ok",
+  archived: "neutral",
+};

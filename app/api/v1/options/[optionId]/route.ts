@@ -1,0 +1,22 @@
+import { loadInWorkspace, route } from "@/app/_lib/access";
+import { AppError } from "@/app/_lib/errors";
+import { optionParamsSchema, optionPatchSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
+import { getDesignOptionById, getRevisionByNumber, updateOptionById } from "@/db/queries/options";
+
+// GET /api/v1/options/:optionId -> { option, revision } (the latest revision, document included)
+export const GET = route({ permission: "read", params: optionParamsSchema }, async ({ member, params }) => {
+  const option = await loadInWorkspace(member, (workspaceId) => getDesignOptionById({ workspaceId, optionId: params.optionId }));
+  const revision = await getRevisionByNumber({ workspaceId: member.workspace.id, optionId: option.id, revision: option.latestRevision });
+  return { option, revision };
+});
+
+// PATCH /api/v1/options/:optionId { name?, summary?, archived? } -> { option }
+export const PATCH = route(
+  { permission: "option:write", params: optionParamsSchema, body: optionPatchSchema },
+  async ({ member, params, body }) => {
+    const current = await loadInWorkspace(member, (workspaceId) => getDesignOptionById({ workspaceId, optionId: params.optionId }));
+    const option = await updateOptionById({ workspaceId: member.workspace.id, optionId: current.id, patch: body });
+    if (!option) throw new AppError("not_found", "Not found.");
+    return { option };
+  },
+);
