@@ -7,6 +7,7 @@ import { getDesignOptionById } from "@/db/queries/options";
 import { getProjectById } from "@/db/queries/projects";
 import { Badge, Caution, LinkButton, PageHeader, WarningItem, WarningList } from "@/components/ui";
 import { BudgetView } from "@/components/budget/BudgetView";
+import { ReportLinks } from "@/components/report/ReportLinks";
 import { editorHref, worstControllerCorner } from "@/components/budget/shape";
 
 export const metadata: Metadata = { title: "Loss and thermal budget" };
@@ -65,6 +66,7 @@ export default async function BudgetPage({ params }: { params: Promise<{ project
   return (
     <>
       {header}
+      <ReportLinks optionId={option.id} revision={budget.revision} benchHref={`/projects/${project.id}/options/${option.id}/bench`} />
       <BudgetView
         projectId={project.id}
         optionId={option.id}
