@@ -10,7 +10,11 @@ export function getPgPool(): pg.Pool {
   if (!globalForPool.heatsplitPgPool) {
     const url = process.env.DATABASE_URL;
     if (!url) throw new Error("DATABASE_URL is not set");
-    globalForPool.heatsplitPgPool = new pg.Pool({ connectionString: url, max: Number(process.env.DB_SESSION_POOL_MAX ?? 5) });
+    const pool = new pg.Pool({ connectionString: url, max: Number(process.env.DB_SESSION_POOL_MAX ?? 5) });
+    // An idle client dropped by a database restart emits "error"; without a
+    // listener that is an uncaught exception. The pool replaces the client.
+    pool.on("error", (e) => console.error("session pool:", e.message));
+    globalForPool.heatsplitPgPool = pool;
   }
   return globalForPool.heatsplitPgPool;
 }

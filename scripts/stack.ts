@@ -6,6 +6,13 @@
 //   start  demo stack on the everyday ports, data kept in .data/start
 //   test   its own ports and a fresh database in .data/test; runs all tests
 //   bench  its own ports and a fresh database in .data/bench; runs benchmarks
+//   load   its own ports and a fresh database; 60 s mixed load (scripts/load)
+//   faults its own ports and a fresh database; database restart under load,
+//          interrupted uploads, unclean stop (scripts/faults)
+//   fuzz   its own ports and a fresh database; the fuzz test with FUZZ_RUNS
+//          (default 10 000) malformed write requests
+// The app's output also goes to .data/<mode>/app.log (security.test.ts
+// reads it to check that no secret reaches a log line).
 import { spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
@@ -13,7 +20,7 @@ import { startPostgres, stopChild } from "./lib/postgres";
 import { migrateAndSeed } from "./lib/migrate";
 import { runTestSuites } from "./lib/test-runners";
 
-type Mode = "start" | "test" | "bench";
+type Mode = "start" | "test" | "bench" | "load" | "faults" | "fuzz";
 const mode = (process.argv[2] ?? "start") as Mode;
 const root = path.resolve(__dirname, "..");
 
@@ -21,6 +28,9 @@ const PORTS: Record<Mode, { pg: number; smtp: number; s3: number; app: number }>
   start: { pg: 54329, smtp: 2525, s3: 4569, app: 3000 },
   test: { pg: 54339, smtp: 2535, s3: 4579, app: 3100 },
   bench: { pg: 54349, smtp: 2545, s3: 4589, app: 3200 },
+  load: { pg: 54359, smtp: 2555, s3: 4599, app: 3300 },
+  faults: { pg: 54369, smtp: 2565, s3: 4609, app: 3400 },
+  fuzz: { pg: 54379, smtp: 2575, s3: 4619, app: 3500 },
 };
 
 const children: ChildProcess[] = [];
@@ -56,6 +66,9 @@ function startLongRunning(name: string, cmd: string, args: string[], env: NodeJS
   return new Promise((resolve, reject) => {
     const child = spawn(cmd, args, { cwd: root, env, stdio: ["ignore", "pipe", "pipe"] });
     children.push(child);
+    const logFile = fs.createWriteStream(path.join(root, ".data", mode, `${name}.log`), { flags: "a" });
+    child.stdout?.pipe(logFile);
+    child.stderr?.pipe(logFile);
     let ready = false;
     const onData = (buf: Buffer) => {
       const text = buf.toString();
@@ -125,8 +138,10 @@ async function main(): Promise<void> {
     return stopAll(ok ? 0 : 1);
   }
 
-  log("building the app (next build)");
-  const buildCode = await run(path.join(root, "node_modules/.bin/next"), ["build"], { ...env, NODE_ENV: "production" });
+  // HEATSPLIT_REUSE_BUILD=1 serves the mode's last build (while iterating on a script, not on the app)
+  const reuse = process.env.HEATSPLIT_REUSE_BUILD === "1" && fs.existsSync(path.join(root, env.NEXT_DIST_DIR!, "BUILD_ID"));
+  log(reuse ? "reusing the last build (HEATSPLIT_REUSE_BUILD=1)" : "building the app (next build)");
+  const buildCode = reuse ? 0 : await run(path.join(root, "node_modules/.bin/next"), ["build"], { ...env, NODE_ENV: "production" });
   if (buildCode !== 0) {
     console.error("next build failed");
     return stopAll(1);
@@ -148,9 +163,29 @@ async function main(): Promise<void> {
     const ok = await runTestSuites({ env, origin, root, argv });
     return stopAll(ok ? 0 : 1);
   }
-  if (mode === "bench") {
-    const code = await run(process.execPath, ["--import", "tsx", "scripts/bench/index.ts"], { ...env, NODE_ENV: "production" });
+  if (mode === "bench" || mode === "load") {
+    const code = await run(process.execPath, ["--import", "tsx", `scripts/${mode}/index.ts`], { ...env, NODE_ENV: "production" });
     return stopAll(code);
+  }
+  if (mode === "fuzz") {
+    const vitestArgs = ["run", "--project", "integration", "tests/integration/fuzz-writes.test.ts"];
+    const code = await run(path.join(root, "node_modules/.bin/vitest"), vitestArgs, { ...env, NODE_ENV: "test", FUZZ_RUNS: process.env.FUZZ_RUNS ?? "10000" });
+    return stopAll(code);
+  }
+  if (mode === "faults") {
+    // In-process, so the database this script started can be stopped and
+    // started again on the same data dir while the app keeps running.
+    Object.assign(process.env, env);
+    const { runFaults } = await import("./faults/index");
+    const restartDb = {
+      stop: () => stopChild(children[0], "SIGINT"),
+      start: async () => {
+        const again = await startPostgres({ root: dataRoot, port: ports.pg, fresh: false, dbName: `heatsplit_${mode}` });
+        children[0] = again.child;
+      },
+    };
+    const ok = await runFaults({ env, origin, db: restartDb });
+    return stopAll(ok ? 0 : 1);
   }
 }
 

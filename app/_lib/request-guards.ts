@@ -38,7 +38,32 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown, what: 
  * form's fields (urlencoded or multipart; strings, so schemas use z.coerce
  * for numbers) for plain <form method="post"> targets.
  */
+/**
+ * PostgreSQL text and jsonb cannot hold U+0000; a string carrying one would
+ * fail deep in a query. Refuse it up front as the caller's error, naming
+ * where it is.
+ */
+export function refuseNulBytes(value: unknown, path = ""): void {
+  if (typeof value === "string") {
+    if (value.includes("\u0000")) throw new AppError("bad_request", "Text may not contain NUL (U+0000) characters.", [{ path: path || "(body)", message: "contains a NUL (U+0000) character" }]);
+    return;
+  }
+  if (Array.isArray(value)) return value.forEach((v, i) => refuseNulBytes(v, path ? `${path}.${i}` : String(i)));
+  if (value && typeof value === "object") {
+    for (const [k, v] of Object.entries(value)) {
+      refuseNulBytes(k, path);
+      refuseNulBytes(v, path ? `${path}.${k}` : k);
+    }
+  }
+}
+
 export async function readBody(req: Request): Promise<unknown> {
+  const body = await readBodyRaw(req);
+  refuseNulBytes(body);
+  return body;
+}
+
+async function readBodyRaw(req: Request): Promise<unknown> {
   const type = (req.headers.get("content-type") ?? "").toLowerCase();
   const declared = Number(req.headers.get("content-length") ?? 0);
   if (declared > MAX_JSON_BODY_BYTES) throw new AppError("payload_too_large", "The request body is too large.");

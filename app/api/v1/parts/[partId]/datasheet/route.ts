@@ -5,6 +5,7 @@ import { getObjectStream } from "@/app/_lib/storage";
 import { partParamsSchema } from "@/app/(workspace)/parts/schema";
 import { getPartById } from "@/db/queries/parts";
 import { getStoredFileById } from "@/db/queries/files";
+import { refuseNulBytes } from "@/app/_lib/request-guards";
 
 // POST /api/v1/parts/:partId/datasheet (multipart field "file", a PDF up to
 // MAX_DATASHEET_BYTES) -> 201 { datasheet }; too big 413, not a PDF 415.
@@ -18,6 +19,7 @@ export const POST = route({ permission: "part:write", params: partParamsSchema }
   const file = (await req.formData()).get("file");
   if (!(file instanceof File)) throw new AppError("bad_request", 'Attach the PDF as the form field "file".');
   if (file.size > MAX_DATASHEET_BYTES) throw new AppError("payload_too_large", `A datasheet may be at most ${MAX_DATASHEET_BYTES / (1024 * 1024)} MB.`);
+  refuseNulBytes({ file: file.name });
   const bytes = new Uint8Array(await file.arrayBuffer());
   const stored = await replacePartDatasheet({
     workspaceId: member.workspace.id,
