@@ -1,5 +1,6 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
 import { AppError } from "@/app/_lib/errors";
+import { refuseNulBytes } from "@/app/_lib/request-guards";
 import { storeBenchUpload } from "@/app/_lib/bench/store";
 import { MAX_BENCH_BYTES, benchParamsSchema, benchUploadFieldsSchema } from "@/app/(workspace)/projects/[projectId]/options/[optionId]/bench/schema";
 import { getDesignOptionById } from "@/db/queries/options";
@@ -22,11 +23,14 @@ export const POST = route({ permission: "bench:write", params: benchParamsSchema
   const file = form.get("file");
   if (!(file instanceof File)) throw new AppError("bad_request", 'Attach the CSV as the form field "file".', [{ path: "file", message: "choose a CSV file" }]);
   if (file.size > MAX_BENCH_BYTES) throw new AppError("payload_too_large", `A bench file may be at most ${MAX_BENCH_BYTES / 1024} kB.`);
+  const bytes = new Uint8Array(await file.arrayBuffer());
+  refuseNulBytes({ file: file.name });
+  if (bytes.includes(0)) throw new AppError("bad_request", "The file contains NUL bytes; send a CSV text file.", [{ path: "file", message: "contains a NUL (U+0000) character" }]);
   const fields = benchUploadFieldsSchema.safeParse({ revision: form.get("revision") ?? option.latestRevision });
   if (!fields.success) throw new AppError("bad_request", "Check the form.", fields.error.issues.map((i) => ({ path: i.path.join("."), message: i.message })));
   const run = await storeBenchUpload({
     workspaceId: member.workspace.id, optionId: option.id, revision: fields.data.revision, userId: member.user.id,
-    filename: file.name, bytes: new Uint8Array(await file.arrayBuffer()),
+    filename: file.name, bytes,
   });
   return reply({ run }, 201);
 });
