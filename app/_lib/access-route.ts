@@ -6,10 +6,11 @@ import { AppError } from "./errors";
 import { can, type Permission } from "./roles";
 import { SESSION_COOKIE, setSessionCookie } from "./auth";
 import { resolveSession, type Member } from "./member";
+import { resolveBearer } from "./api-tokens";
 import { echoesSecret, originAllowed, parseWith, readBody, secretValuesOf } from "./request-guards";
 
 // route(): the wrapper every route handler goes through. Order: origin
-// check (non-GET) -> parse body/query/params (zod, 400; bad params 404) ->
+// check (non-GET without an Authorization header) -> parse body/query/params (zod, 400; bad params 404) ->
 // authenticate (401) -> permission gate for the role (403) -> handler. The
 // handler loads records through workspace-scoped queries (404 for another
 // workspace's), applies record-level rules, acts and returns a Response or
@@ -78,7 +79,9 @@ function wrap(
   return async (req, { params }) => {
     let secrets: string[] = [];
     try {
-      if (!originAllowed(req.method, req.headers)) throw new AppError("forbidden", "Cross-origin request refused.");
+      // A bearer request carries no ambient credential (no cookie is read for
+      // it), so a cross-site page cannot forge one: it skips the Origin check.
+      if (!hasAuthorization(req) && !originAllowed(req.method, req.headers)) throw new AppError("forbidden", "Cross-origin request refused.");
       const raw = opts.body ? await readBody(req) : undefined;
       secrets = secretValuesOf(raw);
       const body = opts.body ? parseWith(opts.body, raw, "request body") : undefined;
@@ -100,14 +103,18 @@ function wrap(
   };
 }
 
+function hasAuthorization(req: NextRequest): boolean {
+  return req.headers.has("authorization");
+}
+
 async function authenticate(req: NextRequest): Promise<{ member: Member | null; signedIn: boolean }> {
   const authorization = req.headers.get("authorization");
   if (authorization) {
-    // HOOK(api-tokens): resolve `Authorization: Bearer <token>` to a Member
-    // with via: "token" here (hash the token, look it up, check expiry and
-    // scope). A bearer request carries no ambient credential, so it is the
-    // one case that may skip the Origin check above. Until then it is refused.
-    throw new AppError("unauthenticated", "API tokens are not accepted yet.");
+    // API tokens (app/_lib/api-tokens.ts): a Member with via "token" and the
+    // user's current role; the session cookie is ignored for such a request.
+    // Unknown, revoked or expired -> 401.
+    const member = await resolveBearer(authorization);
+    return { member, signedIn: true };
   }
   const ctx = await resolveSession(req.cookies.get(SESSION_COOKIE)?.value);
   if (ctx?.sessionRenewed) await setSessionCookie(ctx.sessionId);

@@ -76,7 +76,9 @@ export function BudgetView(props: BudgetViewProps) {
         return;
       }
       setIssues([]);
-      setTrial({ document: doc, design: parsed.design, evaluation: evaluateDesign(parsed.design) });
+      // The server applied the workspace derating policy to `design`; keep it for the trial.
+      const trialDesign = { ...parsed.design, derating: design.derating };
+      setTrial({ document: doc, design: trialDesign, evaluation: evaluateDesign(trialDesign) });
     });
     return () => {
       live = false;

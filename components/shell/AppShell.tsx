@@ -30,6 +30,7 @@ export function navItemsFor(role: Role, devInbox: boolean): NavItem[] {
   const items: NavItem[] = [
     { href: "/projects", label: "Projects" },
     { href: "/parts", label: "Parts library" },
+    { href: "/settings/derating", label: "Derating" },
   ];
   if (can(role, "members:manage")) items.push({ href: "/members", label: "Members" });
   if (devInbox && can(role, "dev:inbox")) items.push({ href: "/dev/inbox", label: "Dev inbox" });

@@ -1,3 +1,4 @@
+import Link from "next/link";
 import type { Role } from "@/app/_lib/roles";
 import { RoleBadge } from "@/components/ui/Badge";
 import { Disclosure } from "./Disclosure";
@@ -46,6 +47,9 @@ export function UserMenu({ displayName, email, workspaceName, role }: UserMenuPr
             <span className="truncate">in {workspaceName}</span>
           </p>
         </div>
+        <Link href="/settings/tokens" className="mt-1.5 flex w-full items-center rounded-md px-3 py-2 text-sm text-ink hover:bg-paper-sunk">
+          API tokens
+        </Link>
         <form method="post" action="/sign-out" className="pt-1.5">
           <button
             type="submit"

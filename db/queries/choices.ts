@@ -2,6 +2,7 @@ import "server-only";
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
+import { insertActivity } from "./activity";
 
 // The manager's recorded choice of design option per project. Append-only:
 // a new choice is a new row and the latest one wins, so the sign-off history
@@ -112,6 +113,10 @@ export async function insertOptionChoice(
       reason: input.reason,
       chosen_by: input.chosenBy,
     });
+    await insertActivity(
+      { workspaceId: input.workspaceId, projectId: input.projectId, optionId: input.optionId, revision: input.revision, actor: input.chosenBy, action: "option.chosen", detail: { choiceId: id, reason: input.reason } },
+      trx,
+    );
     const row = await trx("option_choice as c")
       .join("design_option as o", "o.id", "c.option_id")
       .join("auth_user as u", "u.id", "c.chosen_by")

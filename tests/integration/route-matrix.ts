@@ -33,6 +33,8 @@ import { projectRoutes } from "./route-matrix-projects";
 import { partRoutes } from "./route-matrix-parts";
 import { budgetRoutes } from "./route-matrix-budget";
 import { modelRoutes } from "./route-matrix-model";
+import { reviewRoutes } from "./route-matrix-review";
+import { benchRoutes } from "./route-matrix-bench";
 
 export type Caller = Role | "otherWorkspace" | "signedOut";
 export const CALLERS: readonly Caller[] = [...ROLES, "otherWorkspace", "signedOut"];
@@ -178,4 +180,10 @@ export const MATRIX: MatrixEntry[] = [
 
   // ---- model API (route-matrix-model.ts) ----
   ...modelRoutes({ api }),
+
+  // ---- bench correlation, reports, background jobs (route-matrix-bench.ts) ----
+  ...benchRoutes({ api, page }),
+
+  // ---- review, activity log, derating policy, API tokens (route-matrix-review.ts) ----
+  ...reviewRoutes({ api, page }),
 ];

@@ -29,6 +29,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         actions={
           <>
             <LinkButton href={`/projects/${project.id}/compare`}>Compare options</LinkButton>
+            <LinkButton href={`/projects/${project.id}/activity`}>Activity</LinkButton>
             {canWriteOptions && (
               <LinkButton href="#new-option" variant="primary">
                 New option

@@ -3,10 +3,12 @@ import type { Member } from "@/app/_lib/access";
 import type { AppErrorCode, FieldIssue } from "@/app/_lib/errors";
 import { getDesignOptionById } from "@/db/queries/options";
 import { insertOptionChoice, type OptionChoiceRecord } from "@/db/queries/choices";
+import { mailChosen } from "@/app/_lib/review/notify";
 
 // Shared by the choice route and the compare page's server action: the
 // caller has already checked the "option:choose" permission and loaded the
-// project in the member's workspace.
+// project in the member's workspace. The choice is logged in the activity
+// log and e-mailed to the workspace's designers and reviewers.
 export type RecordChoiceResult =
   | { ok: true; choice: OptionChoiceRecord }
   | { ok: false; code: AppErrorCode; message: string; issues: FieldIssue[] };
@@ -27,5 +29,10 @@ export async function recordOptionChoice(input: {
   if (saved === "option_not_found") return { ok: false, code: "bad_request", message: "Choose one of this project's options.", issues: [{ path: "optionId", message: "not an option of this project" }] };
   if (saved === "revision_not_found")
     return { ok: false, code: "bad_request", message: `Option "${option.name}" has no revision ${revision}.`, issues: [{ path: "revision", message: "no such revision" }] };
+  // Designers and reviewers hear about the sign-off (logged with the choice in insertOptionChoice).
+  await mailChosen({
+    workspaceId, projectId: input.projectId, optionId: option.id, optionName: option.name, revision,
+    actorName: input.member.user.displayName, actorEmail: input.member.user.email, reason: input.reason,
+  });
   return { ok: true, choice: saved };
 }

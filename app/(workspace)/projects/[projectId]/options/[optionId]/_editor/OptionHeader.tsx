@@ -74,6 +74,7 @@ export function OptionHeader({ option: initial, projectName, canWrite, dirty }: 
         actions={
           <>
             <LinkButton href={`/projects/${option.projectId}/options/${option.id}/budget`}>Budget</LinkButton>
+            <LinkButton href={`/projects/${option.projectId}/options/${option.id}/review`}>Review</LinkButton>
             <LinkButton href={`/projects/${option.projectId}/compare`}>Compare options</LinkButton>
             {canWrite && !renaming && (
               <Button variant="secondary" onClick={() => setRenaming(true)}>

@@ -1,0 +1,48 @@
+import "server-only";
+import crypto from "node:crypto";
+import { AppError } from "./errors";
+import { hashToken } from "./tokens";
+import type { Member } from "./member";
+import { getTokenMemberByHash, insertApiToken } from "@/db/queries/api-tokens";
+
+// Personal API tokens for scripts and CI: `Authorization: Bearer hs_...`.
+// The secret is 32 random bytes behind a recognisable prefix (so secret
+// scanners and people can tell what it is); only its SHA-256 is stored.
+export const API_TOKEN_PREFIX = "hs_";
+const TOKEN_BYTES = 32;
+const BEARER = /^Bearer\s+(\S+)\s*$/i;
+
+export function createApiSecret(): { secret: string; tokenHash: string } {
+  const secret = `${API_TOKEN_PREFIX}${crypto.randomBytes(TOKEN_BYTES).toString("base64url")}`;
+  return { secret, tokenHash: hashToken(secret) };
+}
+
+/**
+ * The Member a bearer token acts as, with via "token" and the user's
+ * current role in the token's workspace. Anything but a live token of a
+ * current member -> 401 (one message: no hint whether it existed).
+ */
+export async function resolveBearer(authorization: string): Promise<Member> {
+  const m = BEARER.exec(authorization);
+  const secret = m?.[1];
+  if (!secret || !secret.startsWith(API_TOKEN_PREFIX) || secret.length > 200) {
+    throw new AppError("unauthenticated", "Send a Heatsplit API token as: Authorization: Bearer hs_...");
+  }
+  const found = await getTokenMemberByHash(hashToken(secret));
+  if (!found) throw new AppError("unauthenticated", "This API token is unknown, revoked or expired.");
+  return { user: found.user, workspace: found.workspace, role: found.role, sessionId: "", via: "token" };
+}
+
+/** For routes that must not be reachable with a token (managing tokens, switching workspace). */
+export function requireSessionMember(member: Member): void {
+  if (member.via !== "session") throw new AppError("forbidden", "Sign in to do this; API tokens cannot.");
+}
+
+/** Creates a token for the member in their current workspace; the secret is returned once and never stored. */
+export async function issueApiToken(member: Member, input: { name: string; expiresInDays?: number }) {
+  requireSessionMember(member);
+  const { secret, tokenHash } = createApiSecret();
+  const expiresAt = input.expiresInDays ? new Date(Date.now() + input.expiresInDays * 86_400_000) : null;
+  const token = await insertApiToken({ userId: member.user.id, workspaceId: member.workspace.id, name: input.name, tokenHash, expiresAt });
+  return { token, secret };
+}
