@@ -108,7 +108,7 @@ export const mosfetSchema = z
   .strict()
   .superRefine((m, ctx) => {
     const issue = (path: string, message: string) => ctx.addIssue({ code: "custom", path: [path], message });
-    if (!(m.vth < m.vpl)) issue("vth", "Vth must be below the plateau voltage Vpl");
+    if (!(m.vth < m.vpl)) issue("vth", "Vth must be below the plateau voltage (vpl)");
     if (!(m.vpl + 0.1 <= m.vTest)) issue("vpl", "the plateau Vpl must be at least 0.1 V below the Qg test voltage vTest");
     if (m.qg < m.qgs + m.qgd) issue("qg", "Qg at vTest must be at least Qgs + Qgd");
     const chain = m.rthJC !== undefined || m.rthCS !== undefined || m.rthSA !== undefined;

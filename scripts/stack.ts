@@ -169,7 +169,7 @@ async function main(): Promise<void> {
   }
   if (mode === "fuzz") {
     const vitestArgs = ["run", "--project", "integration", "tests/integration/fuzz-writes.test.ts"];
-    const code = await run(path.join(root, "node_modules/.bin/vitest"), vitestArgs, { ...env, NODE_ENV: "test", FUZZ_RUNS: process.env.FUZZ_RUNS ?? "10000" });
+    const code = await run(path.join(root, "node_modules/.bin/vitest"), vitestArgs, { ...env, NODE_ENV: "test", FUZZ_RUNS: process.env.FUZZ_RUNS ?? "10000", FUZZ_SEED: process.env.FUZZ_SEED ?? "random" });
     return stopAll(code);
   }
   if (mode === "faults") {
