@@ -316,9 +316,9 @@ describe("origin check", () => {
 
 describe("secrets", () => {
   it("no response body or header ever contained a submitted password, a link token or a session id", () => {
-    expect(Client.transcript.length).toBeGreaterThan(40);
+    expect(Client.responseLog.length).toBeGreaterThan(40);
     for (const secret of secrets) {
-      const hit = Client.transcript.find((t) => t.includes(secret));
+      const hit = Client.responseLog.find((t) => t.includes(secret));
       expect(hit, `a response contained a secret:\n${hit?.slice(0, 400)}`).toBeUndefined();
     }
   });

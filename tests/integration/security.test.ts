@@ -123,10 +123,10 @@ describe("session cookie", () => {
 
 describe("no secret leaves the server", () => {
   it("no response body or header of this file carried a password, a session id, a link token or a stored hash", () => {
-    expect(Client.transcript.length).toBeGreaterThan(30);
+    expect(Client.responseLog.length).toBeGreaterThan(30);
     expect(secrets.size).toBeGreaterThan(8);
     for (const s of secrets) {
-      const hit = Client.transcript.find((t) => t.includes(s));
+      const hit = Client.responseLog.find((t) => t.includes(s));
       expect(hit, `a response contained a secret:\n${hit?.slice(0, 300)}`).toBeUndefined();
     }
   });

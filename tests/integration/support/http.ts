@@ -20,7 +20,7 @@ export interface RequestOptions {
 
 export class Client {
   /** Every response (status line, headers and body) any client received, for the no-echo checks. */
-  static readonly transcript: string[] = [];
+  static readonly responseLog: string[] = [];
   readonly cookies = new Map<string, string>();
 
   cookieHeader(): string {
@@ -44,7 +44,7 @@ export class Client {
     for (const c of res.headers.getSetCookie()) this.storeCookie(c);
     const text = await res.text();
     const headerText = [...res.headers].filter(([k]) => k !== "set-cookie").map(([k, v]) => `${k}: ${v}`).join("\n");
-    Client.transcript.push(`${method} ${path} -> ${res.status}\n${headerText}\n\n${text}`);
+    Client.responseLog.push(`${method} ${path} -> ${res.status}\n${headerText}\n\n${text}`);
     return {
       status: res.status,
       headers: res.headers,
