@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { LOSS_MECHANISMS } from "@/models/losses";
+import { sweepSpecSchema } from "@/models/sweepSchema";
 
 // Background jobs: what POST /api/v1/jobs accepts. Each job names an option
 // revision of the caller's workspace; the worker loads it from there. The
@@ -17,34 +17,10 @@ export const MAX_REPORT_STEPS = 200;
 const recordId = z.string().regex(/^[A-Za-z0-9_-]{1,64}$/);
 const source = { optionId: recordId, revision: z.number().int().min(1).max(1_000_000) };
 
-const axisSchema = z
-  .object({
-    axis: z.enum(["fsw", "qgScale", "vin", "ambient", "rGate"]),
-    from: z.number().finite(),
-    to: z.number().finite(),
-    steps: z.number().int().min(2).max(2000),
-    scale: z.enum(["linear", "log"]).optional(),
-    position: z.string().min(1).max(40).optional(),
-    edge: z.enum(["both", "on", "off"]).optional(),
-  })
-  .strict();
-
 export const sweepJobPayloadSchema = z
   .object({
     ...source,
-    spec: z
-      .object({
-        part: z.string().min(1).max(60),
-        metric: z.enum(["rise", "tj", "loss"]).optional(),
-        mechanism: z.enum(LOSS_MECHANISMS).optional(),
-        corner: z.string().min(1).max(60).optional(),
-        x: axisSchema,
-        y: axisSchema,
-        limit: z.number().finite().optional(),
-      })
-      .strict()
-      .refine((s) => s.x.axis !== s.y.axis, { message: "x and y must be different axes", path: ["y", "axis"] })
-      .refine((s) => s.x.steps * s.y.steps <= MAX_JOB_SWEEP_CELLS, { message: `at most ${MAX_JOB_SWEEP_CELLS} cells per job`, path: ["y", "steps"] }),
+    spec: sweepSpecSchema({ maxSteps: 2000, maxCells: MAX_JOB_SWEEP_CELLS, per: "job" }),
   })
   .strict();
 

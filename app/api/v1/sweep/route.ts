@@ -2,7 +2,8 @@ import { z } from "zod";
 import { route } from "@/app/_lib/access";
 import { AppError } from "@/app/_lib/errors";
 import { assertFinite } from "@/app/_lib/finite";
-import { LOSS_MECHANISMS, designInputSchema } from "@/models";
+import { designInputSchema } from "@/models";
+import { sweepSpecSchema } from "@/models/sweepSchema";
 import { SweepSpecError, sweepGrid } from "@/models/sweep";
 
 // POST { design, spec }: one metric of one part over a two-axis grid, with
@@ -10,34 +11,10 @@ import { SweepSpecError, sweepGrid } from "@/models/sweep";
 // stays a request; larger sweeps belong to the browser's worker or a job.
 const MAX_CELLS = 250 * 250;
 
-const axisSchema = z
-  .object({
-    axis: z.enum(["fsw", "qgScale", "vin", "ambient", "rGate"]),
-    from: z.number().finite(),
-    to: z.number().finite(),
-    steps: z.number().int().min(2).max(400),
-    scale: z.enum(["linear", "log"]).optional(),
-    position: z.string().min(1).max(40).optional(),
-    edge: z.enum(["both", "on", "off"]).optional(),
-  })
-  .strict();
-
 const bodySchema = z
   .object({
     design: designInputSchema,
-    spec: z
-      .object({
-        part: z.string().min(1).max(60),
-        metric: z.enum(["rise", "tj", "loss"]).optional(),
-        mechanism: z.enum(LOSS_MECHANISMS).optional(),
-        corner: z.string().min(1).max(60).optional(),
-        x: axisSchema,
-        y: axisSchema,
-        limit: z.number().finite().optional(),
-      })
-      .strict()
-      .refine((s) => s.x.axis !== s.y.axis, { message: "x and y must be different axes", path: ["y", "axis"] })
-      .refine((s) => s.x.steps * s.y.steps <= MAX_CELLS, { message: `at most ${MAX_CELLS} cells per request`, path: ["y", "steps"] }),
+    spec: sweepSpecSchema({ maxSteps: 400, maxCells: MAX_CELLS, per: "request" }),
   })
   .strict();
 
