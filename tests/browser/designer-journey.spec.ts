@@ -2,9 +2,10 @@
 // element in the editor, saves revision 2, duplicates the option and edits
 // the copy; a viewer of the same workspace sees no edit controls and a
 // direct POST of a revision is refused.
-import { expect, test, type Page } from "@playwright/test";
-import { closeTestDb, createWorkspaceWithRoles, TEST_PASSWORD } from "../integration/support/db";
+import { expect, test } from "@playwright/test";
+import { closeTestDb, createWorkspaceWithRoles } from "../integration/support/db";
 import { demoOptions } from "../../models/demo";
+import { signIn } from "./support";
 
 let users: Record<string, { email: string }>;
 
@@ -12,14 +13,6 @@ test.beforeAll(async () => {
   users = (await createWorkspaceWithRoles("journey", ["designer", "viewer"])).users;
 });
 test.afterAll(closeTestDb);
-
-async function signIn(page: Page, email: string) {
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(TEST_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-}
 
 test.describe.configure({ mode: "serial" });
 

@@ -3,8 +3,9 @@
 // them onto the latest revision saves both people's changes. The second
 // editor's change is a library part chosen for the switch.
 import { expect, test, type Browser, type Page } from "@playwright/test";
-import { closeTestDb, createWorkspaceWithRoles, TEST_PASSWORD } from "../integration/support/db";
+import { closeTestDb, createWorkspaceWithRoles } from "../integration/support/db";
 import { demoOptions } from "../../models/demo";
+import { signedInPage as signedInAs } from "./support";
 
 let email = "";
 test.beforeAll(async () => {
@@ -12,14 +13,8 @@ test.beforeAll(async () => {
 });
 test.afterAll(closeTestDb);
 
-async function signedInPage(browser: Browser): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(TEST_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-  return page;
+function signedInPage(browser: Browser): Promise<Page> {
+  return signedInAs(browser, email);
 }
 
 async function post(page: Page, path: string, data: unknown): Promise<Record<string, any>> {

@@ -2,9 +2,10 @@
 // in the table, creates a MOSFET typing "0.047 µC" and sees it normalised to
 // "47 nC", and has a wrong unit refused at the field; a viewer sees no create
 // or import controls and a direct POST with their session is refused.
-import { expect, test, type Page } from "@playwright/test";
-import { closeTestDb, createWorkspaceWithRoles, TEST_PASSWORD } from "../integration/support/db";
+import { expect, test } from "@playwright/test";
+import { closeTestDb, createWorkspaceWithRoles } from "../integration/support/db";
 import { partsCsv } from "../integration/support/parts";
+import { signIn } from "./support";
 
 let users: Record<string, { email: string }>;
 
@@ -12,14 +13,6 @@ test.beforeAll(async () => {
   users = (await createWorkspaceWithRoles("parts-ui", ["designer", "viewer"])).users;
 });
 test.afterAll(closeTestDb);
-
-async function signIn(page: Page, email: string) {
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(TEST_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-}
 
 test.describe.configure({ mode: "serial" });
 

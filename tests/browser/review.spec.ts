@@ -1,9 +1,10 @@
 // Review in the browser: the designer submits revision 1 from the review
 // page, the reviewer rejects it with a comment pinned to Q1, and the
 // designer sees the rejection and the comment on their own review page.
-import { expect, test, type Browser, type Page } from "@playwright/test";
-import { closeTestDb, createWorkspaceWithRoles, TEST_PASSWORD } from "../integration/support/db";
+import { expect, test, type Page } from "@playwright/test";
+import { closeTestDb, createWorkspaceWithRoles } from "../integration/support/db";
 import { demoOptions } from "../../models/demo";
+import { signedInPage } from "./support";
 
 let designerEmail = "";
 let reviewerEmail = "";
@@ -13,16 +14,6 @@ test.beforeAll(async () => {
   reviewerEmail = ws.users.reviewer.email;
 });
 test.afterAll(closeTestDb);
-
-async function signedInPage(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill(TEST_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((u) => !u.pathname.startsWith("/sign-in"));
-  return page;
-}
 
 async function post(page: Page, path: string, data: unknown): Promise<Record<string, any>> {
   const r = await page.request.post(path, { headers: { origin: new URL(page.url()).origin }, data });
