@@ -15,6 +15,7 @@
  */
 import { z } from "zod";
 import { qty } from "./units";
+import { AMBIENT_RANGE_C, FSW_RANGE_HZ } from "./bounds";
 
 export const waveformFields = {
   /** Drain-source voltage just before the turn-on edge. */
@@ -66,9 +67,9 @@ export const cornerSchema = z
     id: z.string().min(1).max(40),
     label: z.string().max(120).optional(),
     vin: qty("voltage", { gt: 0 }),
-    ambient: qty("temperature", { min: -60, max: 200 }),
+    ambient: qty("temperature", AMBIENT_RANGE_C),
     /** 1 Hz … 100 MHz: outside that range the switching models mean nothing. */
-    fsw: qty("frequency", { min: 1, max: 1e8 }),
+    fsw: qty("frequency", FSW_RANGE_HZ),
     loadFraction: qty("ratio", { min: 0, max: 10 }).default(1),
     /** Power delivered to the load (for efficiency of the modelled losses). */
     outputPower: qty("power").optional(),

@@ -5,7 +5,7 @@
  */
 import type { Prepared } from "./evaluateCore";
 import type { CornerResult } from "./evaluateReport";
-import { formatQuantity as fq } from "./units";
+import { formatQuantity as fq } from "./quantityFormat";
 import { MIN_ENHANCEMENT_V } from "./policy";
 
 export type WarningCode =

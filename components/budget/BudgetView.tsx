@@ -15,18 +15,22 @@ import { ControllerView, type OptionControllerSummary } from "./ControllerView";
 import { WhatIf } from "./WhatIf";
 import { ThermalMap } from "./ThermalMap";
 import { lossBarData, warningsFor } from "./shape";
-import { applyKnobs, knobTargets, knobsChanged, readKnobs, type Knobs } from "./whatif";
+import { applyKnobs, applyKnobsToDesign, knobTargets, knobsChanged, readKnobs, trialIssues, type Knobs } from "./whatif";
 
 const LossStackChart = dynamic(() => import("@/components/charts/LossStackChart"), {
   ssr: false,
   loading: () => <div className="h-48 animate-pulse rounded-md bg-paper-sunk" />,
 });
 
-type Models = { parseDesign: typeof import("@/models/schema").parseDesign; evaluateDesign: typeof import("@/models/evaluate").evaluateDesign };
+type Evaluate = typeof import("@/models/evaluate").evaluateDesign;
 
-/** The models load in their own chunk after first paint: the page opens on the server's numbers. */
-function loadModels(): Promise<Models> {
-  return Promise.all([import("@/models/schema"), import("@/models/evaluate")]).then(([s, e]) => ({ parseDesign: s.parseDesign, evaluateDesign: e.evaluateDesign }));
+/**
+ * The evaluator loads in its own chunk after first paint: the page opens on
+ * the server's numbers. Trials start from the server's parsed design, so the
+ * browser never loads the schema or the unit parser (zod, mathjs).
+ */
+function loadEvaluator(): Promise<Evaluate> {
+  return import("@/models/evaluate").then((m) => m.evaluateDesign);
 }
 
 export interface BudgetViewProps {
@@ -52,10 +56,10 @@ export function BudgetView(props: BudgetViewProps) {
   const [knobs, setKnobs] = useState<Knobs>(original);
   const [trial, setTrial] = useState<{ document: unknown; evaluation: Evaluation; design: Design } | null>(null);
   const [issues, setIssues] = useState<string[]>([]);
-  const models = useRef<Promise<Models> | null>(null);
+  const evaluator = useRef<Promise<Evaluate> | null>(null);
 
   useEffect(() => {
-    models.current ??= loadModels();
+    evaluator.current ??= loadEvaluator();
   }, []);
 
   useEffect(() => setKnobs(original), [original]);
@@ -66,19 +70,15 @@ export function BudgetView(props: BudgetViewProps) {
       setIssues([]);
       return;
     }
+    const problems = trialIssues(design, targets, knobs);
+    setIssues(problems);
+    if (problems.length) return;
     let live = true;
-    const doc = applyKnobs(props.document, design, targets, knobs);
-    (models.current ??= loadModels()).then(({ parseDesign, evaluateDesign }) => {
+    (evaluator.current ??= loadEvaluator()).then((evaluateDesign) => {
       if (!live) return;
-      const parsed = parseDesign(doc);
-      if (!parsed.ok) {
-        setIssues(parsed.issues.map((i) => `${i.path}: ${i.message}`));
-        return;
-      }
-      setIssues([]);
-      // The server applied the workspace derating policy to `design`; keep it for the trial.
-      const trialDesign = { ...parsed.design, derating: design.derating };
-      setTrial({ document: doc, design: trialDesign, evaluation: evaluateDesign(trialDesign) });
+      // `design` carries the workspace derating policy the server applied; the trial keeps it.
+      const trialDesign = applyKnobsToDesign(design, targets, knobs);
+      setTrial({ document: applyKnobs(props.document, design, targets, knobs), design: trialDesign, evaluation: evaluateDesign(trialDesign) });
     });
     return () => {
       live = false;

@@ -5,7 +5,8 @@ import { demoOptions } from "@/models/demo";
 import { LOSS_MECHANISMS } from "@/models/losses";
 import { controllerByCorner, editorHref, elementWords, junctionRows, junctionStatus, lossBarData, NEAR_LIMIT_BAND_K, warningsFor } from "./shape";
 import { driveChainBill } from "./bill";
-import { applyKnobs, knobTargets, readKnobs } from "./whatif";
+import fc from "fast-check";
+import { applyKnobs, applyKnobsToDesign, knobTargets, readKnobs, trialIssues } from "./whatif";
 
 function design(i: number): Design {
   const r = parseDesign(demoOptions[i].input);
@@ -117,6 +118,36 @@ describe("what-if knobs", () => {
     const next = parseDesign(applyKnobs(doc, d, t, { ...k, fsw: k.fsw * 1.5 }));
     if (!next.ok) throw new Error("does not parse");
     expect(evaluateDesign(next.design).corners[0].totalLoss).toBeGreaterThan(evaluateDesign(d).corners[0].totalLoss);
+  });
+});
+
+describe("what-if trial without parsing in the browser", () => {
+  // The dashboard evaluates applyKnobsToDesign(parsed design) and checks
+  // trialIssues instead of parsing the raw copy; both must agree with the
+  // schema for any knob values, in range or not.
+  const factor = fc.oneof(fc.double({ min: 0.2, max: 5, noNaN: true }), fc.constantFrom(0, -1, 1e6, 1e-9));
+  const shift = fc.oneof(fc.double({ min: -40, max: 40, noNaN: true }), fc.constantFrom(-500, 300));
+
+  it.each(demoOptions.map((o, i) => [o.key, i] as const))("%s: valid exactly when the schema accepts, and equal to the parse", (_key, i) => {
+    const d = design(i);
+    fc.assert(
+      fc.property(fc.nat({ max: d.positions.length - 1 }), factor, shift, factor, factor, (pos, fk, dT, rk, vk) => {
+        const t = knobTargets(d, pos);
+        const k = readKnobs(d, t);
+        const knobs = {
+          fsw: k.fsw * fk,
+          ambient: k.ambient + dT,
+          rOn: k.rOn === null ? null : k.rOn === 0 ? rk : k.rOn * rk,
+          driveVoltage: k.driveVoltage === null ? null : k.driveVoltage * vk,
+        };
+        const parsed = parseDesign(applyKnobs(demoOptions[i].input, d, t, knobs));
+        const issues = trialIssues(d, t, knobs);
+        expect(issues.length === 0).toBe(parsed.ok);
+        if (parsed.ok) expect(applyKnobsToDesign(d, t, knobs)).toEqual(parsed.design);
+        else expect(issues.join(" ")).toContain(parsed.issues[0].path);
+      }),
+      { numRuns: 150, seed: 20261202 },
+    );
   });
 });
 

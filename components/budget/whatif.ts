@@ -1,9 +1,13 @@
 /**
  * What-if knobs on a design document: read the current values, and write
  * new ones into a copy of the raw document (SI numbers, which the schema
- * accepts beside unit strings). The dashboard re-parses and re-evaluates the
- * copy with the same models code the server runs, and the same copy is what
- * "Save as new revision" sends. Pure; unit-tested.
+ * accepts beside unit strings). The same writes applied to the server's
+ * parsed design give the trial design the dashboard evaluates with the same
+ * models code the server runs, so the browser needs neither the schema nor
+ * the unit parser; `trialIssues` applies the schema's bounds for the four
+ * knobs, and the server validates the raw copy again when "Save as new
+ * revision" sends it. Unit tests hold the trial design equal to a parse of
+ * the raw copy. Pure.
  *
  * Choices (documented in the help text):
  *  - fsw and ambient move every corner together: fsw is scaled by one
@@ -18,6 +22,8 @@
  *    every other stage that defaults to it).
  */
 import type { Design } from "@/models/schema";
+import { AMBIENT_RANGE_C, FSW_RANGE_HZ } from "@/models/bounds";
+import { DIMENSIONS, formatQuantity } from "@/models/quantityFormat";
 
 type Json = unknown;
 type Obj = Record<string, Json>;
@@ -104,6 +110,41 @@ export function applyKnobs(document: unknown, design: Design, t: KnobTargets, kn
   }
   if (t.driveElement && knobs.driveVoltage !== null && knobs.driveVoltage !== now.driveVoltage) setNumber(doc, t.driveElement, knobs.driveVoltage);
   return doc;
+}
+
+/** The parsed design with the knobs applied: what parseDesign(applyKnobs(document, ...)) gives, without parsing. */
+export function applyKnobsToDesign(design: Design, t: KnobTargets, knobs: Knobs): Design {
+  return applyKnobs(design, design, t, knobs) as Design;
+}
+
+/**
+ * Why trial values would not make a valid design, in the schema's words
+ * ("path: message"); empty when they would. The bounds are the schema's own
+ * (models/bounds.ts, and the plausibility range of each dimension).
+ */
+export function trialIssues(design: Design, t: KnobTargets, knobs: Knobs): string[] {
+  const issues: string[] = [];
+  const now = readKnobs(design, t);
+  const range = (path: string, v: number, min: number, max: number, dim: "frequency" | "temperature") => {
+    if (!Number.isFinite(v) || v < min || v > max)
+      issues.push(`${path}: must be at least ${formatQuantity(min, dim)} and at most ${formatQuantity(max, dim)}, got ${formatQuantity(v, dim, 4)}`);
+  };
+  const fswFactor = now.fsw > 0 ? knobs.fsw / now.fsw : 1;
+  design.corners.forEach((c, i) => {
+    range(`corners.${i}.fsw`, c.fsw * fswFactor, FSW_RANGE_HZ.min, FSW_RANGE_HZ.max, "frequency");
+    range(`corners.${i}.ambient`, c.ambient + (knobs.ambient - now.ambient), AMBIENT_RANGE_C.min, AMBIENT_RANGE_C.max, "temperature");
+  });
+  if (knobs.rOn !== null) {
+    const r = DIMENSIONS.resistance;
+    if (!Number.isFinite(knobs.rOn) || knobs.rOn < r.min || knobs.rOn > r.max)
+      issues.push(`${t.rOnElement}: must be at least ${formatQuantity(r.min, "resistance")}, got ${formatQuantity(knobs.rOn, "resistance", 4)}`);
+  }
+  if (t.driveElement && knobs.driveVoltage !== null) {
+    const v = DIMENSIONS.voltage;
+    if (!Number.isFinite(knobs.driveVoltage) || knobs.driveVoltage <= 0 || knobs.driveVoltage > v.max)
+      issues.push(`${t.driveElement}: must be above 0 V, got ${formatQuantity(knobs.driveVoltage, "voltage", 4)}`);
+  }
+  return issues;
 }
 
 export function knobsChanged(a: Knobs, b: Knobs): boolean {

@@ -11,8 +11,10 @@ async function main(): Promise<void> {
     { name: "api", run: runApiBench },
     { name: "pages", run: runPageBench },
   ];
+  // BENCH_SECTIONS=api,pages runs only those (while working on one figure).
+  const only = process.env.BENCH_SECTIONS?.split(",").map((x) => x.trim());
   let ok = true;
-  for (const s of sections) {
+  for (const s of sections.filter((x) => !only || only.includes(x.name))) {
     console.log(`\n=== bench: ${s.name} ===`);
     const r = await s.run();
     for (const line of r.lines) console.log(line);
