@@ -17,7 +17,10 @@ import { ThermalMap } from "./ThermalMap";
 import { lossBarData, warningsFor } from "./shape";
 import { applyKnobs, applyKnobsToDesign, knobTargets, knobsChanged, readKnobs, trialIssues, type Knobs } from "./whatif";
 
-const LossStackChart = dynamic(() => import("@/components/charts/LossStackChart"), {
+const loadLossChart = () => import("@/components/charts/LossStackChart");
+// Fetch the chart's chunk while the page hydrates instead of after.
+if (typeof window !== "undefined") void loadLossChart();
+const LossStackChart = dynamic(loadLossChart, {
   ssr: false,
   loading: () => <div className="h-48 animate-pulse rounded-md bg-paper-sunk" />,
 });

@@ -97,9 +97,21 @@ export function ThermalMap({ design }: { design: Design }) {
     worker.current.postMessage({ type: "start", runId: id, design, spec, chunkRows: CHUNK_ROWS });
   }, [design, partId, cornerId, positionId, xKey, yKey, gridId]);
 
+  // The first sweep waits until the map comes near the viewport, so it does
+  // not compete with the page's own start-up; after that every change re-runs it.
+  const box = useRef<HTMLDivElement | null>(null);
+  const [near, setNear] = useState(false);
   useEffect(() => {
-    run();
-  }, [run]);
+    const el = box.current;
+    if (!el || typeof IntersectionObserver === "undefined") return setNear(true);
+    const io = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setNear(true), { rootMargin: "200px" });
+    io.observe(el);
+    return () => io.disconnect();
+  }, []);
+
+  useEffect(() => {
+    if (near) run();
+  }, [run, near]);
 
   useEffect(() => () => worker.current?.terminate(), []);
 
@@ -108,7 +120,7 @@ export function ThermalMap({ design }: { design: Design }) {
   const select = "h-9 rounded-md border border-paper-edge bg-paper-raised px-2 text-sm";
   const partLabel = parts.find((p) => p.id === (result?.spec.partId ?? partId))?.label ?? partId;
   return (
-    <div className="flex flex-col gap-4">
+    <div className="flex flex-col gap-4" ref={box}>
       <div className="flex flex-wrap items-end gap-3 text-sm">
         <label className="flex flex-col gap-1">
           <span className="font-medium">Part</span>
