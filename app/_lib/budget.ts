@@ -3,6 +3,7 @@ import { parseDesign, type Design, type DesignIssue } from "@/models/schema";
 import { evaluateDesign, type Evaluation } from "@/models/evaluate";
 import { getRevisionByNumber, listOptionsByProject, type OptionRecord, type PartRefs } from "@/db/queries/options";
 import { getDeratingByWorkspace, type DeratingValues } from "@/db/queries/derating";
+import { LRUCache } from "lru-cache";
 import { applyWorkspaceDerating } from "./derating";
 
 // The budget of an option's latest revision, computed on the server by the
@@ -25,12 +26,38 @@ export async function loadOptionBudget({
   /** The workspace policy if the caller already has it (null: none set); read here when omitted. */
   policy?: DeratingValues | null;
 }): Promise<OptionBudget | null> {
-  const rev = await getRevisionByNumber({ workspaceId, optionId: option.id, revision: option.latestRevision });
+  const [rev, rules] = await Promise.all([
+    getRevisionByNumber({ workspaceId, optionId: option.id, revision: option.latestRevision }),
+    policy === undefined ? getDeratingByWorkspace(workspaceId) : policy,
+  ]);
   if (!rev) return null;
-  const parsed = parseDesign(rev.document);
-  if (!parsed.ok) return { ok: false, revision: rev.revision, issues: parsed.issues };
-  const design = applyWorkspaceDerating(parsed.design, policy === undefined ? await getDeratingByWorkspace(workspaceId) : policy);
-  return { ok: true, revision: rev.revision, document: rev.document, partRefs: rev.partRefs, design, evaluation: evaluateDesign(design) };
+  const values = rules && { tjMargin: rules.tjMargin, vgsMaxFraction: rules.vgsMaxFraction, minHeadroomAbovePlateau: rules.minHeadroomAbovePlateau };
+  const key = `${workspaceId}|${option.id}|${rev.revision}|${JSON.stringify(values)}`;
+  let done = evaluated.get(key);
+  if (!done) {
+    const parsed = parseDesign(rev.document);
+    if (!parsed.ok) return { ok: false, revision: rev.revision, issues: parsed.issues };
+    const design = applyWorkspaceDerating(parsed.design, values);
+    done = deepFreeze({ design, evaluation: evaluateDesign(design) });
+    evaluated.set(key, done);
+  }
+  return { ok: true, revision: rev.revision, document: rev.document, partRefs: rev.partRefs, design: done.design, evaluation: done.evaluation };
+}
+
+// A stored revision's document never changes (a new revision is a new row),
+// so its evaluation under a given derating policy is fixed for the life of
+// this process (the models code cannot change under it). The dashboard, its
+// data route and the comparison re-read the same revisions all the time;
+// they share one evaluation per (option, revision, policy). Frozen, so no
+// caller can change what another one reads. Up to 500 budgets (~100 kB each).
+const evaluated = new LRUCache<string, { design: Design; evaluation: Evaluation }>({ max: 500 });
+
+function deepFreeze<T>(v: T): T {
+  if (v !== null && typeof v === "object" && !Object.isFrozen(v)) {
+    Object.freeze(v);
+    for (const x of Object.values(v)) deepFreeze(x);
+  }
+  return v;
 }
 
 /** Every (non-archived) option of a project with its budget, in the project's listing order. */
