@@ -3,6 +3,7 @@ import { formatSi } from "@/components/ui/format";
 import { LOSS_MECHANISMS, type LossMechanism } from "@/models/losses";
 import { PART_TYPES } from "@/models/policy";
 import type { CornerResult } from "@/models/evaluate";
+import { groupWarnings } from "@/models/warningGroups";
 import type { ReportData } from "./data";
 import { line, para, type Doc } from "./pdfText";
 import { CONTENT_WIDTH, PAGE, SOFT, ensure, heading, table, type Column } from "./pdfLayout";
@@ -101,9 +102,10 @@ export function reviewSection(doc: Doc, d: ReportData, y: number): number {
 export function warningsSection(doc: Doc, d: ReportData, y: number): number {
   let at = heading(doc, "Warnings", y);
   if (d.evaluation.warnings.length === 0) return para(doc, "The model raised no warnings at any corner.", M, at, CONTENT_WIDTH, { size: 9 }) + 8;
-  for (const w of d.evaluation.warnings) {
+  for (const w of groupWarnings(d.evaluation.warnings)) {
     at = ensure(doc, at, 24);
-    at = para(doc, `[${w.severity}] ${w.cornerId} · ${w.partId}: ${w.message}`, M, at, CONTENT_WIDTH, { size: 8.5, color: w.severity === "error" ? "#8e2a20" : undefined }) + 2;
+    const corners = w.cornerIds.length === 1 ? `corner ${w.cornerIds[0]}` : `corners ${w.cornerIds.join(", ")}`;
+    at = para(doc, `[${w.severity}] ${w.partId} (${corners}): ${w.message}`, M, at, CONTENT_WIDTH, { size: 8.5, color: w.severity === "error" ? "#8e2a20" : undefined }) + 2;
   }
   return at + 8;
 }
