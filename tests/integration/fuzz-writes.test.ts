@@ -12,7 +12,7 @@
 // Total requests: FUZZ_RUNS (default 300; `npm run fuzz` sends 10 000).
 import crypto from "node:crypto";
 import fc from "fast-check";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import type { Role } from "@/app/_lib/roles";
 import { Client, ORIGIN } from "./support/http";
 import { TEST_PASSWORD, addMembership, clearAddressThrottle, closeTestDb, createUser, createWorkspaceWithRoles, testDb, uniqueEmail } from "./support/db";
@@ -42,6 +42,10 @@ async function signedIn(email: string): Promise<Client> {
   if (r.status !== 200) throw new Error(`fuzz sign-in failed: ${r.status} ${r.text}`);
   return c;
 }
+
+// The sign-in routes' cases fail passwords on purpose; the loopback address's
+// count would then throttle every later fixture's sign-in for 15 minutes.
+afterEach(clearAddressThrottle);
 
 beforeAll(async () => {
   await clearAddressThrottle();
