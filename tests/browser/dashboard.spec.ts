@@ -103,6 +103,8 @@ test("the thermal map has rows × cols cells of the chosen grid, the limit line 
   await signIn(page.request, users.designer.email);
   await page.setViewportSize({ width: 1440, height: 1000 });
   await page.goto(`/projects/${projectId}/options/${optionIds[0]}/budget`);
+  // the first sweep starts when the map comes near the viewport, as it does for a reader scrolling down
+  await page.locator('[data-sweep="grid"]').scrollIntoViewIfNeeded();
   await page.locator('[data-sweep="grid"]').selectOption("coarse");
   const map = page.locator('[data-chart="sweep-heatmap"]');
   await expect(map).toHaveAttribute("data-cols", "16", { timeout: 30_000 });
