@@ -4,9 +4,9 @@
 //  - client JavaScript: every script response of a cold load of the budget
 //    page (lazy chunks loaded after first paint included), each body gzipped
 //    with zlib, summed; target < 350 kB
-//  - time to interactive: navigation start -> the dashboard's interactive
-//    marker ([data-budget-ready] once the view sets it; until then the
-//    hydrated [data-budget-view] with its loss chart drawn), median of three
+//  - time to interactive: navigation start -> the first animation frame where
+//    [data-budget-view] is hydrated (React owns it, so its controls answer)
+//    and its loss chart has drawn a bar, median of five
 //    cold loads; target < 2 s
 //  - the dashboard data route GET /api/v1/options/:id/budget: autocannon,
 //    20 connections, 10 s, p95; target < 100 ms (our own target)
@@ -21,11 +21,10 @@ const CHROMIUM_ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable
 
 /** Resolves to performance.now() at the first animation frame where the dashboard is interactive. */
 const INTERACTIVE = () => {
-  const marked = document.querySelector("[data-budget-ready]");
   const view = document.querySelector("[data-budget-view]");
   const hydrated = view && Object.keys(view).some((k) => k.startsWith("__reactFiber") || k.startsWith("__reactProps"));
   const chart = document.querySelector('[data-chart="loss-stack"] [data-testid^="bar.item."]');
-  return marked || (hydrated && chart) ? performance.now() : false;
+  return hydrated && chart ? performance.now() : false;
 };
 
 async function coldLoad(browser: Browser, account: Account, url: string): Promise<{ tti: number; gzipBytes: number; scripts: number }> {
@@ -58,12 +57,12 @@ export async function runPageBench(): Promise<{ ok: boolean; lines: string[] }> 
   const loads = [];
   try {
     await coldLoad(browser, account, url); // warm the server (first render of the route), not measured
-    for (let i = 0; i < 3; i++) loads.push(await coldLoad(browser, account, url));
+    for (let i = 0; i < 5; i++) loads.push(await coldLoad(browser, account, url));
   } finally {
     await browser.close();
   }
   const ttis = loads.map((l) => l.tti).sort((a, b) => a - b);
-  const tti = ttis[1];
+  const tti = ttis[2];
   const jsKb = Math.max(...loads.map((l) => l.gzipBytes)) / 1024;
 
   const dataPath = `/api/v1/options/${optionId}/budget`;
