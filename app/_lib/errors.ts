@@ -31,3 +31,24 @@ export class AppError extends Error {
     this.status = STATUS[code];
   }
 }
+
+// PostgreSQL SQLSTATEs of a server that is going away or not accepting
+// connections yet (class 08 connection exception; 57P01-57P03 operator
+// intervention: admin/crash shutdown, cannot connect now), and the socket
+// errors of a refused or broken connection.
+const DB_DOWN_CODES = new Set(["08000", "08001", "08003", "08004", "08006", "57P01", "57P02", "57P03", "ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT", "ENOTCONN"]);
+const DB_DOWN_MESSAGES = [/Connection terminated/i, /timeout exceeded when trying to connect/i, /Timeout acquiring a connection/i, /Client has encountered a connection error/i];
+
+/** True when `err` says the database cannot be reached right now (not a bug in the request or the query). */
+export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {
+  if (!err || typeof err !== "object" || depth > 3) return false;
+  const e = err as { code?: unknown; message?: unknown; errors?: unknown; cause?: unknown };
+  if (typeof e.code === "string" && DB_DOWN_CODES.has(e.code)) return true;
+  if (typeof e.message === "string" && DB_DOWN_MESSAGES.some((re) => re.test(e.message as string))) return true;
+  if (Array.isArray(e.errors) && e.errors.some((x) => isDatabaseUnavailable(x, depth + 1))) return true; // AggregateError of a refused connect
+  return isDatabaseUnavailable(e.cause, depth + 1);
+}
+
+export const DATABASE_UNAVAILABLE_MESSAGE = "The database cannot be reached just now; nothing was saved. Try again in a few seconds.";
+/** Seconds a client should wait before retrying a 503 (Retry-After). */
+export const DATABASE_RETRY_AFTER_S = 5;

@@ -2,7 +2,9 @@
 // revision saves) runs while PostgreSQL is stopped with SIGINT (fast
 // shutdown) and started again on the same data dir. Holds when
 //  - every request is answered within the client timeout (no hang),
-//  - every failure is a 5xx JSON error with no stack trace or driver detail,
+//  - every failure is a 503 JSON error with code "unavailable" and a
+//    Retry-After (the database is away, not the request at fault), with no
+//    stack trace or driver detail,
 //  - the app answers 2xx again by itself within RECOVERY_S of the restart,
 //    and nothing but 2xx/409 after that,
 //  - no save acknowledged with a 201 is missing and none is stored twice.
@@ -25,6 +27,15 @@ const LEAK = /\bat [\w.<>]+ \(|node_modules|\.ts:\d+|ECONNREFUSED|ECONNRESET|ter
 interface Seen {
   at: number;
   status: number;
+  /** error.code of a 5xx JSON answer. */
+  code?: string;
+  retryAfter?: boolean;
+}
+
+/** autocannon hands the headers over as an object keyed by the names as sent. */
+function hasHeader(headers: unknown, name: string): boolean {
+  if (!headers || typeof headers !== "object") return false;
+  return Object.keys(headers).some((k) => k.toLowerCase() === name);
 }
 
 export async function runDbRestart(db: DbControl): Promise<{ ok: boolean; lines: string[] }> {
@@ -36,15 +47,18 @@ export async function runDbRestart(db: DbControl): Promise<{ ok: boolean; lines:
   const observe = (entry: Hooked): Hooked => ({
     ...entry,
     onResponse: (status, body, context, headers) => {
-      seen.push({ at: Date.now(), status });
+      const entrySeen: Seen = { at: Date.now(), status };
+      seen.push(entrySeen);
       if (status >= 500) {
-        let json = false;
+        let code: unknown;
         try {
-          json = typeof (JSON.parse(body) as { error?: { code?: unknown } }).error?.code === "string";
+          code = (JSON.parse(body) as { error?: { code?: unknown } }).error?.code;
         } catch {
-          json = false;
+          code = undefined;
         }
-        if (!json || LEAK.test(body)) leaks.push(`${status} ${body.slice(0, 200)}`);
+        if (typeof code !== "string" || LEAK.test(body)) leaks.push(`${status} ${body.slice(0, 200)}`);
+        entrySeen.code = typeof code === "string" ? code : undefined;
+        entrySeen.retryAfter = hasHeader(headers, "retry-after");
       }
       entry.onResponse?.(status, body, context, headers);
     },
@@ -79,7 +93,10 @@ export async function runDbRestart(db: DbControl): Promise<{ ok: boolean; lines:
   pool.stop();
   const audit = await auditRevisions(optionIds, pool.acknowledged, pool.unanswered());
 
-  const failedWhileDown = seen.filter((s) => s.at >= downAt && s.at < upAt && s.status >= 500).length;
+  const downFailures = seen.filter((s) => s.at >= downAt && s.at < upAt && s.status >= 500);
+  const failedWhileDown = downFailures.length;
+  const asUnavailable = downFailures.filter((s) => s.status === 503 && s.code === "unavailable" && s.retryAfter).length;
+  const otherFailures = seen.filter((s) => s.status >= 500 && !(s.status === 503 && s.code === "unavailable"));
   const firstOk = seen.find((s) => s.at >= upAt && s.status < 300);
   const recoveredIn = firstOk ? (firstOk.at - upAt) / 1000 : Number.POSITIVE_INFINITY;
   const badAfter = seen.filter((s) => s.at > upAt + RECOVERY_S * 1000 && s.status >= 300 && s.status !== 409).length;
@@ -87,7 +104,10 @@ export async function runDbRestart(db: DbControl): Promise<{ ok: boolean; lines:
   const okBefore = seen.filter((s) => s.at < downAt && s.status < 300).length;
   const checks: [string, boolean][] = [
     [`requests answered before the stop: ${okBefore} 2xx`, okBefore > 0],
-    [`failures while the database was down: ${failedWhileDown}, all 5xx JSON without internals (${leaks.length} leaks)`, failedWhileDown > 0 && leaks.length === 0],
+    [
+      `failures while the database was down: ${failedWhileDown}, ${asUnavailable} of them 503 "unavailable" with Retry-After; other 5xx in the whole run: ${otherFailures.length} (${[...new Set(otherFailures.map((s) => `${s.status} ${s.code}`))].join(", ") || "none"}); ${leaks.length} leaks of internals`,
+      failedWhileDown > 0 && asUnavailable === failedWhileDown && otherFailures.length === 0 && leaks.length === 0,
+    ],
     [
       `no hang: ${run.result.timeouts} timeouts (10 s), ${run.result.errors} socket errors, slowest answered save ${slowest} ms`,
       run.result.timeouts === 0 && run.result.errors === 0 && slowest < 10_000,
