@@ -274,14 +274,7 @@ export function gateChargeNetlist(m: VdmosCard, load: ClampedLoad, ig: number, v
   const t0 = 10e-9;
   const vq = 1000;
   const tEnd = t0 + 150e-9 / ig;
-  return `* gate charge test of ${m.name}
-.model ${m.name} VDMOS(${m.params})
-${FREEWHEEL}
-Vbus bus 0 ${sp(load.vBus)}
-Iload bus sw ${sp(load.iLoad)}
-Dfw sw bus dfw
-Rsd sw d 1m
-M1 d g 0 ${m.name}
+  return `${clampedStage(`gate charge test of ${m.name}`, m, load)}
 Vq src 0 PULSE(0 ${sp(vq)} ${sp(t0)} 1e-9 1e-9 1 2)
 Rq src g ${sp(vq / ig)}
 .control
@@ -322,6 +315,30 @@ meas dc vth find v(g) when id=${sp(id)}
 }
 
 /**
+ * The power stage the gate-charge test and both edge netlists share: the
+ * load current source (the inductor, constant over the edge) freewheeling
+ * through FREEWHEEL to the bus, the 1 mΩ drain-terminal sense resistor and
+ * the switch with its gate on node g.
+ */
+function clampedStage(title: string, m: VdmosCard, load: ClampedLoad): string {
+  return `* ${title}
+.model ${m.name} VDMOS(${m.params})
+${FREEWHEEL}
+Vbus bus 0 ${sp(load.vBus)}
+Iload bus sw ${sp(load.iLoad)}
+Dfw sw bus dfw
+Rsd sw d 1m
+M1 d g 0 ${m.name}`;
+}
+
+/** The stage with a gate step from `from` to `to` at t0 through rGate. */
+function clampedEdgeDeck(title: string, m: VdmosCard, load: ClampedLoad, from: number, to: number, rGate: number, t0: number): string {
+  return `${clampedStage(title, m, load)}
+Vdrv gd 0 PULSE(${sp(from)} ${sp(to)} ${sp(t0)} 1e-9 1e-9 1 2)
+Rgate gd g ${sp(rGate)}`;
+}
+
+/**
  * Hard turn-off of the clamped inductive load: the device conducts iLoad at
  * the operating point (gate at vHigh), then a PULSE source through rGate
  * takes the gate to vLow. Drain current is sensed at the drain terminal by a
@@ -331,16 +348,7 @@ meas dc vth find v(g) when id=${sp(id)}
 export function turnOffNetlist(m: VdmosCard, load: ClampedLoad, drive: { vHigh: number; vLow: number; rGate: number }, window: number): string {
   const t0 = 20e-9;
   const tEnd = t0 + window;
-  return `* turn-off of ${m.name}
-.model ${m.name} VDMOS(${m.params})
-${FREEWHEEL}
-Vbus bus 0 ${sp(load.vBus)}
-Iload bus sw ${sp(load.iLoad)}
-Dfw sw bus dfw
-Rsd sw d 1m
-M1 d g 0 ${m.name}
-Vdrv gd 0 PULSE(${sp(drive.vHigh)} ${sp(drive.vLow)} ${sp(t0)} 1e-9 1e-9 1 2)
-Rgate gd g ${sp(drive.rGate)}
+  return `${clampedEdgeDeck(`turn-off of ${m.name}`, m, load, drive.vHigh, drive.vLow, drive.rGate, t0)}
 .control
 op
 tran ${sp(window / 40000)} ${sp(tEnd)} 0 ${sp(Math.min(window / 4000, 5e-11))}
@@ -386,16 +394,7 @@ meas tran id_end find id at=${sp(tEnd)}
 export function turnOnNetlist(m: VdmosCard, load: ClampedLoad, drive: { vHigh: number; vLow: number; rGate: number }, window: number): string {
   const t0 = 20e-9;
   const tEnd = t0 + window;
-  return `* turn-on of ${m.name}
-.model ${m.name} VDMOS(${m.params})
-${FREEWHEEL}
-Vbus bus 0 ${sp(load.vBus)}
-Iload bus sw ${sp(load.iLoad)}
-Dfw sw bus dfw
-Rsd sw d 1m
-M1 d g 0 ${m.name}
-Vdrv gd 0 PULSE(${sp(drive.vLow)} ${sp(drive.vHigh)} ${sp(t0)} 1e-9 1e-9 1 2)
-Rgate gd g ${sp(drive.rGate)}
+  return `${clampedEdgeDeck(`turn-on of ${m.name}`, m, load, drive.vLow, drive.vHigh, drive.rGate, t0)}
 .control
 op
 save all @m1[id]

@@ -5,32 +5,15 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { evaluateDesign, type DesignInput, type EdgeResult } from "@/models";
 import { runNgspice, valueOf } from "./ngspice";
-import { gateChargeNetlist, thresholdNetlist, turnOffNetlist, type VdmosCard } from "./netlists";
+import { turnOffNetlist } from "./netlists";
+import { DEVICE, LOAD, V_HIGH, sheet, type Sheet } from "./vdmosSheet";
 import { designOf } from "./fromModel";
 
-const DEVICE: VdmosCard = {
-  name: "mx",
-  // Generic 60 V-class trench-like part (invented): Vto 3 V, Rg 1.2 Ω, nonlinear Cgd 1 nF → 80 pF.
-  params: "Vto=3 Kp=20 Rd=4m Rs=2m Rg=1.2 Cgdmax=1n Cgdmin=80p A=0.3 Cgs=1.5n Cjo=400p Is=1e-12 Rb=5m lambda=0.01",
-};
-const LOAD = { vBus: 48, iLoad: 10 };
-const V_HIGH = 12;
 const CASES = [
   { vLow: 0, r: 2.2 }, { vLow: 0, r: 10 }, { vLow: -10, r: 2.2 }, { vLow: -10, r: 10 },
 ];
 
-interface Sheet { qgs: number; qgd: number; qg: number; vpl: number; vth: number; ciss: number }
 interface Edge { tv: number; ti: number; eoff: number; vClamp: number }
-
-async function sheet(): Promise<Sheet> {
-  const q = await runNgspice(gateChargeNetlist(DEVICE, LOAD, 1e-3, 10));
-  const t = await runNgspice(thresholdNetlist(DEVICE));
-  const v = (k: string) => valueOf(q, k);
-  return {
-    qgs: v("q_pl"), qgd: v("q_pl_end") - v("q_pl"), qg: v("q_test"), vpl: v("v_pl"), vth: valueOf(t, "vth"),
-    ciss: (v("q_b") - v("q_a")) / 0.5,
-  };
-}
 
 /** ngspice turn-off; 10–90 % times scaled by 1/0.8 to the full ramp the model's t_v, t_i stand for. */
 async function spiceEdge(vLow: number, r: number): Promise<Edge> {

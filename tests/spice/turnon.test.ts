@@ -64,16 +64,10 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { evaluateDesign, type DesignInput, type EdgeResult } from "@/models";
 import { runNgspice, sp, valueOf } from "./ngspice";
-import { gateChargeNetlist, thresholdNetlist, turnOnNetlist, type VdmosCard } from "./netlists";
+import { turnOnNetlist } from "./netlists";
+import { DEVICE, LOAD, V_HIGH, sheet, type Sheet } from "./vdmosSheet";
 import { designOf } from "./fromModel";
 
-const DEVICE: VdmosCard = {
-  name: "mx",
-  // The card of switching.test.ts (generic 60 V-class trench-like part, invented).
-  params: "Vto=3 Kp=20 Rd=4m Rs=2m Rg=1.2 Cgdmax=1n Cgdmin=80p A=0.3 Cgs=1.5n Cjo=400p Is=1e-12 Rb=5m lambda=0.01",
-};
-const LOAD = { vBus: 48, iLoad: 10 };
-const V_HIGH = 12;
 const FSW = 100e3;
 // The model's turn-on gate current is (V+ − Vpl)/R: V− does not enter it. ngspice
 // starts the edge from V− (longer delay), so both levels are run to check that claim.
@@ -81,7 +75,6 @@ const CASES = [
   { vLow: 0, r: 2.2 }, { vLow: 0, r: 10 }, { vLow: -10, r: 2.2 }, { vLow: -10, r: 10 },
 ];
 
-interface Sheet { qgs: number; qgd: number; qg: number; vpl: number; vth: number; ciss: number }
 interface OnEdge {
   ti: number; tv: number; eon: number; eChannel: number;
   /** Vds before the edge (bus + diode drop) and after it, V; Id after it, A. */
@@ -90,16 +83,6 @@ interface OnEdge {
   tStart: number;
 }
 interface ModelOn { edge: EdgeResult; coss: number; reverseRecovery: number }
-
-async function sheet(): Promise<Sheet> {
-  const q = await runNgspice(gateChargeNetlist(DEVICE, LOAD, 1e-3, 10));
-  const t = await runNgspice(thresholdNetlist(DEVICE));
-  const v = (k: string) => valueOf(q, k);
-  return {
-    qgs: v("q_pl"), qgd: v("q_pl_end") - v("q_pl"), qg: v("q_test"), vpl: v("v_pl"), vth: valueOf(t, "vth"),
-    ciss: (v("q_b") - v("q_a")) / 0.5,
-  };
-}
 
 /** ngspice turn-on; 10–90 % times scaled by 1/0.8 to the full ramp the model's t_i, t_v stand for. */
 async function spiceEdge(vLow: number, r: number): Promise<OnEdge> {
