@@ -3,10 +3,10 @@
 // The model gets the device's "datasheet" from ngspice itself: a JESD24-2 style
 // gate-charge test (Qgs, Qgd, Qg, Vpl, slope below the plateau) and Vth at 250 µA.
 import { beforeAll, describe, expect, it } from "vitest";
-import { evaluateDesign, type DesignInput, type EdgeResult } from "@/models";
+import { evaluateDesign, type EdgeResult } from "@/models";
 import { runNgspice, valueOf } from "./ngspice";
 import { turnOffNetlist } from "./netlists";
-import { DEVICE, LOAD, V_HIGH, sheet, type Sheet } from "./vdmosSheet";
+import { DEVICE, LOAD, V_HIGH, edgeCheckDesign, sheet, type Sheet } from "./vdmosSheet";
 import { designOf } from "./fromModel";
 
 const CASES = [
@@ -24,25 +24,7 @@ async function spiceEdge(vLow: number, r: number): Promise<Edge> {
 
 /** The same switch in a one-position design: ideal driver (V+, V−), gate resistor r. */
 function modelEdge(d: Sheet, vLow: number, r: number, vClamp: number): EdgeResult {
-  const q = (x: number) => `${x} C`;
-  const input: DesignInput = {
-    name: "turn-off check",
-    corners: [{ id: "c", vin: 48, ambient: 25, fsw: 100e3 }],
-    controller: { vcc: 12, iq: 0, pin: { sourceResistance: 1, sinkResistance: 1 }, rthJA: 50 },
-    positions: [{
-      id: "Q1", role: "primary",
-      mosfet: {
-        qgs: q(d.qgs), qgd: q(d.qgd), qg: q(d.qg), vTest: 10, vth: d.vth, vpl: d.vpl, ciss: d.ciss, rgInt: 1.2,
-        rds25: 0.006, rthJA: 40,
-      },
-      drive: { kind: "driver-ic", supply: V_HIGH, vNeg: vLow, sourceResistance: 1e-6, sinkResistance: 1e-6, rthJA: 100 },
-      gate: { rOn: r },
-      conduction: {
-        switching: "hard",
-        points: [{ vin: 48, duty: 0.5, vdsOn: vClamp, idOn: LOAD.iLoad, vdsOff: vClamp, idOff: LOAD.iLoad, iRms: 7, iAvg: 5 }],
-      },
-    }],
-  };
+  const input = edgeCheckDesign(d, { name: "turn-off check", vLow, rGate: r, vds: vClamp });
   const edge = evaluateDesign(designOf(input)).corners[0].positions[0].turnOff;
   if (!edge) throw new Error("no turn-off edge in the model result");
   return edge;

@@ -62,13 +62,12 @@
 // and the upper bounds leave 10–30 % of headroom above what is seen, so a model off by
 // a further factor of about 1.3 fails.
 import { beforeAll, describe, expect, it } from "vitest";
-import { evaluateDesign, type DesignInput, type EdgeResult } from "@/models";
+import { evaluateDesign, type EdgeResult } from "@/models";
 import { runNgspice, sp, valueOf } from "./ngspice";
 import { turnOnNetlist } from "./netlists";
-import { DEVICE, LOAD, V_HIGH, sheet, type Sheet } from "./vdmosSheet";
+import { DEVICE, EDGE_FSW as FSW, LOAD, V_HIGH, edgeCheckDesign, sheet, type Sheet } from "./vdmosSheet";
 import { designOf } from "./fromModel";
 
-const FSW = 100e3;
 // The model's turn-on gate current is (V+ − Vpl)/R: V− does not enter it. ngspice
 // starts the edge from V− (longer delay), so both levels are run to check that claim.
 const CASES = [
@@ -117,27 +116,7 @@ meas tran eoss integ p from=0 to=1e-6
 
 /** The same switch in a one-position design: ideal driver (V+, V−), gate resistor r, no diode recovery. */
 function modelOn(d: Sheet, vLow: number, r: number, vBlock: number, eoss?: number): ModelOn {
-  const q = (x: number) => `${x} C`;
-  const input: DesignInput = {
-    name: "turn-on check",
-    corners: [{ id: "c", vin: 48, ambient: 25, fsw: FSW }],
-    controller: { vcc: 12, iq: 0, pin: { sourceResistance: 1, sinkResistance: 1 }, rthJA: 50 },
-    positions: [{
-      id: "Q1", role: "primary",
-      mosfet: {
-        qgs: q(d.qgs), qgd: q(d.qgd), qg: q(d.qg), vTest: 10, vth: d.vth, vpl: d.vpl, ciss: d.ciss, rgInt: 1.2,
-        rds25: 0.006, rthJA: 40,
-        ...(eoss !== undefined ? { outputCapacitance: { vTest: vBlock, eoss: `${eoss} J` } } : {}),
-      },
-      drive: { kind: "driver-ic", supply: V_HIGH, vNeg: vLow, sourceResistance: 1e-6, sinkResistance: 1e-6, rthJA: 100 },
-      gate: { rOn: r },
-      conduction: {
-        switching: "hard",
-        opposingQrr: q(0),
-        points: [{ vin: 48, duty: 0.5, vdsOn: vBlock, idOn: LOAD.iLoad, vdsOff: vBlock, idOff: LOAD.iLoad, iRms: 7, iAvg: 5 }],
-      },
-    }],
-  };
+  const input = edgeCheckDesign(d, { name: "turn-on check", vLow, rGate: r, vds: vBlock, opposingQrr: 0, eoss });
   const corner = evaluateDesign(designOf(input)).corners[0];
   const edge = corner.positions[0].turnOn;
   if (!edge) throw new Error("no turn-on edge in the model result");
