@@ -2,7 +2,7 @@ import "server-only";
 import { cookies, headers } from "next/headers";
 import { unstable_rethrow } from "next/navigation";
 import type { z } from "zod";
-import { AppError, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "./errors";
+import { AppError, DATABASE_UNAVAILABLE_MESSAGE, databaseErrorSummary, isDatabaseUnavailable } from "./errors";
 import { can, type Permission } from "./roles";
 import { SESSION_COOKIE, setSessionCookie } from "./auth";
 import { resolveSession, type Member } from "./member";
@@ -83,7 +83,7 @@ function wrap<S extends z.ZodType>(
       unstable_rethrow(err);
       if (err instanceof AppError) return failure(err.message, fieldErrorsOf(err.issues));
       if (isDatabaseUnavailable(err)) {
-        console.error(`server action: database unavailable (${(err as { code?: string }).code ?? (err as Error).message})`);
+        console.error(`server action: database unavailable (${databaseErrorSummary(err)})`);
         return failure(DATABASE_UNAVAILABLE_MESSAGE);
       }
       console.error("server action failed:", err);

@@ -2,7 +2,7 @@ import "server-only";
 import type { NextRequest } from "next/server";
 import { unstable_rethrow } from "next/navigation";
 import type { z } from "zod";
-import { AppError, DATABASE_RETRY_AFTER_S, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "./errors";
+import { AppError, DATABASE_RETRY_AFTER_S, DATABASE_UNAVAILABLE_MESSAGE, databaseErrorSummary, isDatabaseUnavailable } from "./errors";
 import { can, type Permission } from "./roles";
 import { SESSION_COOKIE, setSessionCookie } from "./auth";
 import { resolveSession, type Member } from "./member";
@@ -138,7 +138,7 @@ function errorResponse(err: unknown, req: NextRequest): Response {
     return Response.json({ error: { code: err.code, message: err.message, issues: err.issues } }, { status: err.status });
   }
   if (isDatabaseUnavailable(err)) {
-    console.error(`route ${req.method} ${req.nextUrl.pathname}: database unavailable (${(err as { code?: string }).code ?? (err as Error).message})`);
+    console.error(`route ${req.method} ${req.nextUrl.pathname}: database unavailable (${databaseErrorSummary(err)})`);
     return Response.json(
       { error: { code: "unavailable", message: DATABASE_UNAVAILABLE_MESSAGE, issues: [] } },
       { status: 503, headers: { "retry-after": String(DATABASE_RETRY_AFTER_S) } },

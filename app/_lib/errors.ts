@@ -49,6 +49,12 @@ export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {
   return isDatabaseUnavailable(e.cause, depth + 1);
 }
 
+/** For the log line: the driver's code, else its message (never shown to the client). */
+export function databaseErrorSummary(err: unknown): string {
+  const e = err as { code?: unknown; message?: unknown } | null;
+  return typeof e?.code === "string" ? e.code : String(e?.message ?? err);
+}
+
 export const DATABASE_UNAVAILABLE_MESSAGE = "The database cannot be reached just now; nothing was saved. Try again in a few seconds.";
 /** Seconds a client should wait before retrying a 503 (Retry-After). */
 export const DATABASE_RETRY_AFTER_S = 5;

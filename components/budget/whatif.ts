@@ -23,7 +23,7 @@
  */
 import type { Design } from "@/models/schema";
 import { AMBIENT_RANGE_C, FSW_RANGE_HZ } from "@/models/bounds";
-import { DIMENSIONS, formatQuantity } from "@/models/quantityFormat";
+import { DIMENSIONS, formatQuantity, type Dimension } from "@/models/quantityFormat";
 
 type Json = unknown;
 type Obj = Record<string, Json>;
@@ -125,25 +125,18 @@ export function applyKnobsToDesign(design: Design, t: KnobTargets, knobs: Knobs)
 export function trialIssues(design: Design, t: KnobTargets, knobs: Knobs): string[] {
   const issues: string[] = [];
   const now = readKnobs(design, t);
-  const range = (path: string, v: number, min: number, max: number, dim: "frequency" | "temperature") => {
-    if (!Number.isFinite(v) || v < min || v > max)
-      issues.push(`${path}: must be at least ${formatQuantity(min, dim)} and at most ${formatQuantity(max, dim)}, got ${formatQuantity(v, dim, 4)}`);
+  /** The schema's rule for one value: at least `min` (above it when `above`), at most `max`. */
+  const check = (path: string, v: number, dim: Dimension, min: number, max: number, above = false) => {
+    if (Number.isFinite(v) && (above ? v > min : v >= min) && v <= max) return;
+    issues.push(`${path}: must be ${above ? "above" : "at least"} ${formatQuantity(min, dim)} and at most ${formatQuantity(max, dim)}, got ${formatQuantity(v, dim, 4)}`);
   };
   const fswFactor = now.fsw > 0 ? knobs.fsw / now.fsw : 1;
   design.corners.forEach((c, i) => {
-    range(`corners.${i}.fsw`, c.fsw * fswFactor, FSW_RANGE_HZ.min, FSW_RANGE_HZ.max, "frequency");
-    range(`corners.${i}.ambient`, c.ambient + (knobs.ambient - now.ambient), AMBIENT_RANGE_C.min, AMBIENT_RANGE_C.max, "temperature");
+    check(`corners.${i}.fsw`, c.fsw * fswFactor, "frequency", FSW_RANGE_HZ.min, FSW_RANGE_HZ.max);
+    check(`corners.${i}.ambient`, c.ambient + (knobs.ambient - now.ambient), "temperature", AMBIENT_RANGE_C.min, AMBIENT_RANGE_C.max);
   });
-  if (knobs.rOn !== null) {
-    const r = DIMENSIONS.resistance;
-    if (!Number.isFinite(knobs.rOn) || knobs.rOn < r.min || knobs.rOn > r.max)
-      issues.push(`${t.rOnElement}: must be at least ${formatQuantity(r.min, "resistance")}, got ${formatQuantity(knobs.rOn, "resistance", 4)}`);
-  }
-  if (t.driveElement && knobs.driveVoltage !== null) {
-    const v = DIMENSIONS.voltage;
-    if (!Number.isFinite(knobs.driveVoltage) || knobs.driveVoltage <= 0 || knobs.driveVoltage > v.max)
-      issues.push(`${t.driveElement}: must be above 0 V, got ${formatQuantity(knobs.driveVoltage, "voltage", 4)}`);
-  }
+  if (knobs.rOn !== null) check(t.rOnElement, knobs.rOn, "resistance", DIMENSIONS.resistance.min, DIMENSIONS.resistance.max);
+  if (t.driveElement && knobs.driveVoltage !== null) check(t.driveElement, knobs.driveVoltage, "voltage", 0, DIMENSIONS.voltage.max, true);
   return issues;
 }
 
