@@ -34,8 +34,9 @@ export class AppError extends Error {
 
 // PostgreSQL SQLSTATEs of a server that is going away or not accepting
 // connections yet (class 08 connection exception; 57P01-57P03 operator
-// intervention: admin/crash shutdown, cannot connect now), and the socket
-// errors of a refused or broken connection.
+// intervention: admin/crash shutdown, cannot connect now; PostgreSQL manual,
+// appendix A, recalled from memory), and the socket errors of a refused or
+// broken connection.
 const DB_DOWN_CODES = new Set(["08000", "08001", "08003", "08004", "08006", "57P01", "57P02", "57P03", "ECONNREFUSED", "ECONNRESET", "EPIPE", "ETIMEDOUT", "ENOTCONN"]);
 const DB_DOWN_MESSAGES = [/Connection terminated/i, /timeout exceeded when trying to connect/i, /Timeout acquiring a connection/i, /Client has encountered a connection error/i];
 

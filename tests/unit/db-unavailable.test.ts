@@ -2,9 +2,11 @@ import { describe, expect, it } from "vitest";
 import { isDatabaseUnavailable } from "@/app/_lib/errors";
 
 // Errors as node-postgres, pg-pool, knex and node's net module raise them
-// when PostgreSQL is stopped, restarting or refusing connections (shapes
-// seen in the app log during `npm run faults`; SQLSTATEs from the
-// PostgreSQL manual, appendix A "PostgreSQL Error Codes").
+// when PostgreSQL is stopped, restarting or refusing connections. The
+// refused-connect and terminated-connection shapes are the ones `npm run
+// faults` provokes; the other messages are the drivers' own wording and the
+// SQLSTATEs those of the PostgreSQL manual, appendix A "PostgreSQL Error
+// Codes", both recalled from memory.
 const withCode = (code: string, message = "x") => Object.assign(new Error(message), { code });
 
 describe("isDatabaseUnavailable: 503 for a database that is away, 500 for everything else", () => {
