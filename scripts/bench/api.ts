@@ -6,8 +6,9 @@
 //    connections (no code of ours runs);
 //  - the model's floor: in-process CPU time of parse + evaluate + finite
 //    check + JSON per request, and what Little's law makes of it (L = λW;
-//    J. D. C. Little, Operations Research 9, 1961; recalled from memory): a closed loop of N connections on one core waits at least
-//    N × that time on average.
+//    J. D. C. Little, Operations Research 9, 1961; recalled from memory):
+//    a closed loop of N connections on one core waits at least N × that
+//    time on average.
 import autocannon from "autocannon";
 import crypto from "node:crypto";
 import { demoOptions } from "../../models/demo";
