@@ -24,7 +24,7 @@ type Mode = "start" | "test" | "bench" | "load" | "faults" | "fuzz";
 const mode = (process.argv[2] ?? "start") as Mode;
 const root = path.resolve(__dirname, "..");
 
-const PORTS: Record<Mode, { pg: number; smtp: number; s3: number; app: number }> = {
+const BASE_PORTS: Record<Mode, { pg: number; smtp: number; s3: number; app: number }> = {
   start: { pg: 54329, smtp: 2525, s3: 4569, app: 3000 },
   test: { pg: 54339, smtp: 2535, s3: 4579, app: 3100 },
   bench: { pg: 54349, smtp: 2545, s3: 4589, app: 3200 },
@@ -32,6 +32,16 @@ const PORTS: Record<Mode, { pg: number; smtp: number; s3: number; app: number }>
   faults: { pg: 54369, smtp: 2565, s3: 4609, app: 3400 },
   fuzz: { pg: 54379, smtp: 2575, s3: 4619, app: 3500 },
 };
+
+// HEATSPLIT_PORT_OFFSET (a multiple of 1000, default 0) shifts every port, so
+// two checkouts on one machine can run their test stacks side by side.
+const PORT_OFFSET = Number(process.env.HEATSPLIT_PORT_OFFSET ?? 0);
+if (!Number.isInteger(PORT_OFFSET) || PORT_OFFSET < 0 || PORT_OFFSET > 9000) {
+  throw new Error("HEATSPLIT_PORT_OFFSET must be an integer from 0 to 9000");
+}
+const PORTS = Object.fromEntries(
+  Object.entries(BASE_PORTS).map(([m, p]) => [m, { pg: p.pg + PORT_OFFSET, smtp: p.smtp + PORT_OFFSET, s3: p.s3 + PORT_OFFSET, app: p.app + PORT_OFFSET }]),
+) as typeof BASE_PORTS;
 
 const children: ChildProcess[] = [];
 let stopping = false;
