@@ -30,7 +30,7 @@ export function designBom(design: Design): Bom {
     add(p.id, p.mosfet.partNumber, p.mosfet.count, p.mosfet.cost);
     const d = p.drive;
     if (p.conduction.mode === "body-diode" || d.kind === "none") continue;
-    const gateParts = 1 + (p.gate.rOff !== undefined ? 1 : 0) + (p.gate.steeringDiode ? 1 : 0);
+    const gateParts = 1 + (p.gate.rTurnOff !== undefined ? 1 : 0) + (p.gate.steeringDiode ? 1 : 0);
     lines.push({ ref: `${p.id}.gate`, partNumber: null, quantity: gateParts, unitCost: p.gate.cost !== undefined ? p.gate.cost / gateParts : null });
     if (d.kind === "bjt-follower") {
       add(`${p.id}.npn`, d.npn.partNumber, 1, d.npn.cost);

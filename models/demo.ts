@@ -11,8 +11,8 @@
  */
 import type { DesignInput } from "./schema";
 import {
-  clampQZ12, controllerHSC3842X, driverHSD1206S, driverHSD4410, mosfetQN080S3, mosfetQN150F12,
-  npnQTN3HC, npnQTN40S, pnpQTP3HC, pnpQTP40S, transformerHGT1016,
+  clampQZ12, controllerHRGPC72, driverHRGLS9T, driverHRGSR5K, mosfetQN080S3, mosfetQN150F12,
+  npnQTN3HC, npnQTN6SL, pnpQTP3HC, pnpQTP6SL, transformerGRWT16,
 } from "./demoParts";
 
 export { demoParts, type DemoPart } from "./demoParts";
@@ -30,35 +30,35 @@ const corners: DesignInput["corners"] = [
 const q1Conduction = {
   switching: "hard" as const,
   points: [
-    { vin: "36 V", duty: 0.52, vdsOn: "36 V", idOn: "12 A", vdsOff: "75 V", idOff: "15 A", iRms: "9.7 A", iAvg: "7.0 A" },
-    { vin: "48 V", duty: 0.39, vdsOn: "48 V", idOn: "12 A", vdsOff: "79 V", idOff: "15 A", iRms: "8.4 A", iAvg: "5.3 A" },
-    { vin: "75 V", duty: 0.25, vdsOn: "75 V", idOn: "12 A", vdsOff: "100 V", idOff: "15 A", iRms: "6.8 A", iAvg: "3.4 A" },
+    { vin: "36 V", duty: 0.52, turnOnVds: "36 V", turnOnId: "12 A", turnOffVds: "75 V", turnOffId: "15 A", iRms: "9.7 A", iAvg: "7.0 A" },
+    { vin: "48 V", duty: 0.39, turnOnVds: "48 V", turnOnId: "12 A", turnOffVds: "79 V", turnOffId: "15 A", iRms: "8.4 A", iAvg: "5.3 A" },
+    { vin: "75 V", duty: 0.25, turnOnVds: "75 V", turnOnId: "12 A", turnOffVds: "100 V", turnOffId: "15 A", iRms: "6.8 A", iAvg: "3.4 A" },
   ],
 };
 
 /**
  * SRs turn on and off with their body diode conducting (ZVS; the turn-off
- * edge is clamped by the diode). vdsOff is the voltage each blocks next, used
+ * edge is clamped by the diode). turnOffVds is the voltage each blocks next, used
  * for its reverse recovery.
  */
 const sr1Conduction = {
   switching: "zvs" as const, deadTimes: ["30 ns", "40 ns"] as [string, string],
   points: [
-    { vin: "36 V", duty: 0.52, vdsOn: "0 V", idOn: "18 A", vdsOff: "26 V", idOff: "22 A", iRms: "14.4 A", iAvg: "10.4 A" },
-    { vin: "48 V", duty: 0.39, vdsOn: "0 V", idOn: "18 A", vdsOff: "20.5 V", idOff: "22 A", iRms: "12.5 A", iAvg: "7.8 A" },
-    { vin: "75 V", duty: 0.25, vdsOn: "0 V", idOn: "18 A", vdsOff: "16.7 V", idOff: "22 A", iRms: "10 A", iAvg: "5 A" },
+    { vin: "36 V", duty: 0.52, turnOnVds: "0 V", turnOnId: "18 A", turnOffVds: "26 V", turnOffId: "22 A", iRms: "14.4 A", iAvg: "10.4 A" },
+    { vin: "48 V", duty: 0.39, turnOnVds: "0 V", turnOnId: "18 A", turnOffVds: "20.5 V", turnOffId: "22 A", iRms: "12.5 A", iAvg: "7.8 A" },
+    { vin: "75 V", duty: 0.25, turnOnVds: "0 V", turnOnId: "18 A", turnOffVds: "16.7 V", turnOffId: "22 A", iRms: "10 A", iAvg: "5 A" },
   ],
 };
 const sr2Conduction = {
   switching: "zvs" as const, deadTimes: ["40 ns", "30 ns"] as [string, string],
   points: [
-    { vin: "36 V", duty: 0.48, vdsOn: "0 V", idOn: "22 A", vdsOff: "24 V", idOff: "18 A", iRms: "13.9 A", iAvg: "9.6 A" },
-    { vin: "48 V", duty: 0.61, vdsOn: "0 V", idOn: "22 A", vdsOff: "32 V", idOff: "18 A", iRms: "15.6 A", iAvg: "12.2 A" },
-    { vin: "75 V", duty: 0.75, vdsOn: "0 V", idOn: "22 A", vdsOff: "50 V", idOff: "18 A", iRms: "17.3 A", iAvg: "15 A" },
+    { vin: "36 V", duty: 0.48, turnOnVds: "0 V", turnOnId: "22 A", turnOffVds: "24 V", turnOffId: "18 A", iRms: "13.9 A", iAvg: "9.6 A" },
+    { vin: "48 V", duty: 0.61, turnOnVds: "0 V", turnOnId: "22 A", turnOffVds: "32 V", turnOffId: "18 A", iRms: "15.6 A", iAvg: "12.2 A" },
+    { vin: "75 V", duty: 0.75, turnOnVds: "0 V", turnOnId: "22 A", turnOffVds: "50 V", turnOffId: "18 A", iRms: "17.3 A", iAvg: "15 A" },
   ],
 };
 
-const gateOnOff = { rOn: "2.2 Ω", rOff: "1 Ω", steeringDiode: { vf: "0.7 V" }, cost: "0.03 USD" };
+const gateOnOff = { rTurnOn: "2.2 Ω", rTurnOff: "1 Ω", steeringDiode: { vf: "0.7 V" }, cost: "0.03 USD" };
 
 function q1(drive: PositionInput["drive"], gate: PositionInput["gate"] = gateOnOff): PositionInput {
   return { id: "Q1", role: "primary", label: "Main switch", mosfet: mosfetQN150F12, drive, gate, conduction: q1Conduction };
@@ -66,9 +66,9 @@ function q1(drive: PositionInput["drive"], gate: PositionInput["gate"] = gateOnO
 
 const srWithDrivers: PositionInput[] = [
   { id: "SR1", role: "synchronous-rectifier", label: "Forward SR", mosfet: mosfetQN080S3,
-    drive: { kind: "driver-ic", ...driverHSD1206S }, gate: { rOn: "1 Ω", cost: "0.005 USD" }, conduction: sr1Conduction },
+    drive: { kind: "driver-ic", ...driverHRGSR5K }, gate: { rTurnOn: "1 Ω", cost: "0.005 USD" }, conduction: sr1Conduction },
   { id: "SR2", role: "synchronous-rectifier", label: "Freewheel SR (2 in parallel)", mosfet: { ...mosfetQN080S3, count: 2 },
-    drive: { kind: "driver-ic", ...driverHSD1206S }, gate: { rOn: "1 Ω", cost: "0.005 USD" }, conduction: sr2Conduction },
+    drive: { kind: "driver-ic", ...driverHRGSR5K }, gate: { rTurnOn: "1 Ω", cost: "0.005 USD" }, conduction: sr2Conduction },
 ];
 
 /**
@@ -79,7 +79,7 @@ const srWithDrivers: PositionInput[] = [
 const srSelfDriven: PositionInput[] = [
   { ...srWithDrivers[0],
     drive: { kind: "self-driven", winding: { ref: "vin", k: 0.27, kNeg: 0.08 }, windingResistance: "0.2 Ω", clamp: clampQZ12 },
-    gate: { rOn: "4.7 Ω", rOff: "1 Ω", steeringDiode: { vf: "0.4 V" }, cost: "0.03 USD" } },
+    gate: { rTurnOn: "4.7 Ω", rTurnOff: "1 Ω", steeringDiode: { vf: "0.4 V" }, cost: "0.03 USD" } },
   { ...srWithDrivers[1],
     drive: { kind: "self-driven", winding: { ref: "vout", vHigh: "10 V", vLow: "0 V" }, windingResistance: "0.2 Ω" } },
 ];
@@ -92,16 +92,16 @@ const derating = {
 
 function design(name: string, q: PositionInput, srs: PositionInput[], coupling: { from: string; to: string; theta: string }[]): DesignInput {
   return {
-    name, corners, controller: controllerHSC3842X, positions: [q, ...srs],
+    schemaVersion: 2, name, corners, controller: controllerHRGPC72, positions: [q, ...srs],
     thermal: { coupling: [{ from: "controller", to: "Q1", theta: "3 K/W" }, { from: "SR1", to: "SR2", theta: "2 K/W" }, ...coupling] },
     derating,
   };
 }
 
-/** Follower bases through 4.7 Ω each (damps the base loop, common practice); turn-off through rOn ∥ rOff. */
-const follower = (npn: typeof npnQTN40S, pnp: typeof pnpQTP40S) =>
+/** Follower bases through 4.7 Ω each (damps the base loop, common practice); turn-off through rTurnOn ∥ rTurnOff. */
+const follower = (npn: typeof npnQTN6SL, pnp: typeof pnpQTP6SL) =>
   ({ kind: "bjt-follower" as const, npn: { ...npn, rBase: "4.7 Ω" }, pnp: { ...pnp, rBase: "4.7 Ω" } });
-const followerGate = { rOn: "2.2 Ω", rOff: "2.2 Ω", steeringDiode: { vf: "0.7 V" }, cost: "0.03 USD" };
+const followerGate = { rTurnOn: "2.2 Ω", rTurnOff: "2.2 Ω", steeringDiode: { vf: "0.7 V" }, cost: "0.03 USD" };
 
 export const demoOptions: { key: string; name: string; summary: string; input: DesignInput }[] = [
   {
@@ -114,7 +114,7 @@ export const demoOptions: { key: string; name: string; summary: string; input: D
     key: "bjt-small",
     name: "2 · Small-signal NPN/PNP follower",
     summary: "Two SOT-23 small-signal transistors take the gate current off the pin. Their gain collapses above a few hundred mA, so peaks are gain-limited.",
-    input: design("HX-240 option 2: small-signal follower", q1(follower(npnQTN40S, pnpQTP40S), followerGate), srWithDrivers, [
+    input: design("HX-240 option 2: small-signal follower", q1(follower(npnQTN6SL, pnpQTP6SL), followerGate), srWithDrivers, [
       { from: "Q1.npn", to: "Q1.pnp", theta: "60 K/W" },
       { from: "controller", to: "Q1.npn", theta: "15 K/W" },
     ]),
@@ -123,7 +123,7 @@ export const demoOptions: { key: string; name: string; summary: string; input: D
     key: "driver-ic",
     name: "3 · Gate-driver IC",
     summary: "A 4 A driver next to Q1: fast edges, gate heat in the driver and the gate resistors, the controller only feeds its input.",
-    input: design("HX-240 option 3: driver IC", q1({ kind: "driver-ic", ...driverHSD4410 }), srWithDrivers, [
+    input: design("HX-240 option 3: driver IC", q1({ kind: "driver-ic", ...driverHRGLS9T }), srWithDrivers, [
       { from: "Q1.driver", to: "Q1", theta: "4 K/W" },
     ]),
   },
@@ -132,14 +132,14 @@ export const demoOptions: { key: string; name: string; summary: string; input: D
     name: "4 · Gate transformer with negative bias",
     summary: "Driver IC into a 1:1.6 AC-coupled gate transformer: isolation and about −5 … −10 V turn-off bias, but positive drive shrinks at high duty.",
     input: design("HX-240 option 4: AC-coupled gate transformer",
-      q1({ kind: "transformer", mode: "ac-coupled", ...transformerHGT1016, driver: driverHSD4410 }), srWithDrivers,
+      q1({ kind: "transformer", mode: "ac-coupled", ...transformerGRWT16, driver: driverHRGLS9T }), srWithDrivers,
       [{ from: "Q1.driver", to: "Q1", theta: "2 K/W" }]),
   },
   {
     key: "self-driven-sr",
     name: "5 · Driver IC + self-driven SRs with clamp",
     summary: "Option 3's primary; the SR driver ICs go, SR1 is driven from a winding through a 12 V zener clamp (needed across 36–75 V), SR2 from an output winding.",
-    input: design("HX-240 option 5: self-driven SRs", q1({ kind: "driver-ic", ...driverHSD4410 }), srSelfDriven, [
+    input: design("HX-240 option 5: self-driven SRs", q1({ kind: "driver-ic", ...driverHRGLS9T }), srSelfDriven, [
       { from: "Q1.driver", to: "Q1", theta: "4 K/W" },
     ]),
   },

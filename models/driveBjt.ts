@@ -14,8 +14,8 @@
  * rises, so the root is unique). When the gain term binds, the transistor
  * is current-limited: the voltage it cannot pass drops across its C–E.
  *
- * Energy: the ½·ΔQ·ΔV of each edge splits over [transistor R_eff, rOn,
- * Rg(int)]; of the transistor's part a fraction 1/(hFE+1) is in the base
+ * Energy: the ½·ΔQ·ΔV of each edge splits over [transistor R_eff, gate
+ * resistor, Rg(int)]; of the transistor's part a fraction 1/(hFE+1) is in the base
  * circuit (the pin and the base resistor, carrying Ib), the rest in the
  * transistor (carrying Ic). The follower drop (supply − V_gate,high on the
  * way up, V_gate,low − V− on the way down) × ΔQ is burnt in the transistor.
@@ -85,10 +85,11 @@ function followerEdge(
   t: Bjt, tPart: string, pinR: number, pinLimit: number, controllerPart: string, basePart: string,
   gate: PathElement[], swing: number, plateauDrive: number,
 ): EdgePath {
-  let rGate = 0;
-  for (const e of gate) rGate += Math.max(e.r, 0);
-  // Rg(int) > 0 keeps this positive; the floor only guards the division.
-  rGate = Math.max(rGate, 1e-9);
+  let rGiven = 0;
+  for (const e of gate) rGiven += Math.max(e.r, 0);
+  // Gate resistors and Rg(int) may all be 0: the floor keeps the divisions
+  // finite, and the gate elements then get no share (the transistor takes it).
+  const rGate = Math.max(rGiven, 1e-9);
   const rBase = pinR + t.rBase;
   const peak = followerCurrent({ vAvail: swing, rBase, rGate, pinLimit, points: t.hfe });
   const pl = followerCurrent({ vAvail: plateauDrive, rBase, rGate, pinLimit, points: t.hfe });
@@ -97,7 +98,7 @@ function followerEdge(
   // Effective transistor resistance swing/I − R_gate, written as conductances so
   // a vanishing current stays finite.
   const g = peak.current > 0 && swing > 0 ? peak.current / swing : 1 / Math.max(rEq + rGate, 1e-6);
-  const tShare = Math.min(Math.max(1 - rGate * g, rEq / Math.max(rEq + rGate, 1e-6)), 1);
+  const tShare = rGiven > 0 ? Math.min(Math.max(1 - rGate * g, rEq / Math.max(rEq + rGate, 1e-6)), 1) : 1;
   const total = Math.min(1 / g, 1e15);
   const baseShare = tShare / (h + 1);
   const rEff = total - rGate;
@@ -109,7 +110,7 @@ function followerEdge(
     { part: tPart, fraction: tShare - baseShare },
     { part: controllerPart, fraction: baseShare * pinFrac },
     ...(t.rBase > 0 ? [{ part: basePart, fraction: baseShare * (1 - pinFrac) }] : []),
-    ...gate.map((e) => ({ part: e.part, fraction: rGate > 0 ? ((1 - tShare) * Math.max(e.r, 0)) / rGate : 0 })),
+    ...gate.map((e) => ({ part: e.part, fraction: rGiven > 0 ? ((1 - tShare) * Math.max(e.r, 0)) / rGiven : 0 })),
   ];
   return {
     shares,

@@ -80,7 +80,7 @@ export interface StageContext {
   /** Corner input voltage and this switch's duty. */
   vin: number;
   duty: number;
-  /** External gate resistors (possibly overridden by a sweep). */
+  /** External gate resistors gate.rTurnOn / gate.rTurnOff (possibly overridden by a sweep). */
   rOn: number;
   rOff: number | undefined;
 }
@@ -93,9 +93,10 @@ export interface PathElement {
 /**
  * The external gate network and Rg(int). Parallel devices share the external
  * resistor and each has its own Rg(int): Rg(int)/count in the path.
- * A steering-diode turn-off (rOff + diode across rOn) is written as two
- * pseudo-series elements whose sum is rOn ∥ rOff and whose ratio is the
- * energy ratio of the parallel branches (power ∝ conductance).
+ * Rg(int) may be 0. A steering-diode turn-off (rTurnOff + diode across
+ * rTurnOn) is written as two pseudo-series elements whose sum is
+ * rTurnOn ∥ rTurnOff and whose ratio is the energy ratio of the parallel
+ * branches (power ∝ conductance).
  */
 export function gateElements(ctx: StageContext): { on: PathElement[]; off: PathElement[]; offOffset: number } {
   const id = ctx.position.id;
@@ -114,7 +115,7 @@ export function gateElements(ctx: StageContext): { on: PathElement[]; off: PathE
     { part: `${id}.rgOff`, r: sum > 0 ? (rPar * ctx.rOn) / sum : 0 },
     internal,
   ];
-  // Thevenin of "0 V through rOn" ∥ "Vf through rOff".
+  // Thevenin of "0 V through rTurnOn" ∥ "Vf through rTurnOff".
   return { on, off, offOffset: sum > 0 ? (diode.vf * ctx.rOn) / sum : diode.vf };
 }
 
@@ -123,14 +124,18 @@ export function gateElements(ctx: StageContext): { on: PathElement[]; off: PathE
  * transformer) that may be current-limited. A limited source is modelled as
  * a resistor that gives the same peak current (common practice for a
  * current-limited driver), so its energy share grows accordingly.
+ * A path with no resistance at all (a stiff winding, 0 Ω external and
+ * internal gate resistance) still burns ½·ΔQ·ΔV per edge (a capacitor
+ * charged from a step loses that whatever the resistance, closed form):
+ * it is booked on the last element, the switch's own gate.
  */
 export function seriesEdge(
   elements: PathElement[],
   { peakDrive, plateauDrive, limit }: { peakDrive: number; plateauDrive: number; limit: number },
 ): EdgePath {
-  let rSum = 0;
-  for (const e of elements) rSum += Math.max(e.r, 0);
-  rSum = Math.max(rSum, 1e-6);
+  let rGiven = 0;
+  for (const e of elements) rGiven += Math.max(e.r, 0);
+  const rSum = Math.max(rGiven, 1e-6);
   const peak = Math.max(peakDrive, 0);
   const iRes = peak / rSum;
   const iPeak = Math.min(iRes, limit);
@@ -140,6 +145,7 @@ export function seriesEdge(
   const g = limited ? iPeak / peak : 1 / rSum;
   const shares = elements.map((e) => ({ part: e.part, fraction: Math.max(e.r, 0) * g }));
   if (limited) shares[0].fraction = Math.max(1 - (rSum - Math.max(elements[0].r, 0)) * g, 0);
+  else if (rGiven <= 0 && shares.length > 0) shares[shares.length - 1].fraction = 1;
   const rTotal = limited ? Math.min(peak / Math.max(iPeak, 1e-300), 1e15) : rSum;
   return { shares, iPeak, iPlateau, rTotal, starved: false, hfe: null, hfeNominal: null };
 }

@@ -21,7 +21,7 @@ export function prepare(design: Design): Prepared {
   const partIndex = new Map(parts.map((p, i) => [p.id, i]));
   const positions = design.positions.map((position, index) => {
     const m = position.mosfet;
-    const curve: GateChargeCurve = { qgs: m.qgs, qgd: m.qgd, qg: m.qg, vTest: m.vTest, vth: m.vth, vpl: m.vpl, ciss: m.ciss };
+    const curve: GateChargeCurve = { qgs: m.qgs, qgd: m.qgd, qg: m.qg, qgVgs: m.qgVgs, vth: m.vth, vpl: m.vpl, ciss: m.ciss };
     return {
       position, index, part: partIndex.get(position.id) as number, curve, qgs2: qgs2(curve),
       cornerWaveforms: design.corners.map((c) => cornerWaveform(position, c)), memo: null,

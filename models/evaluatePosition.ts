@@ -41,8 +41,8 @@ export function computePosition(prep: Prepared, pp: PreparedPosition, ci: number
   const L = prep.loss;
   const mine = ov.position === undefined || ov.position === p.id;
   const w = ov.vin === undefined ? pp.cornerWaveforms[ci] : cornerWaveform(p, corner, vin);
-  const rOn = mine && ov.rOn !== undefined ? ov.rOn : p.gate.rOn;
-  const rOff = mine && ov.rOff !== undefined ? ov.rOff : p.gate.rOff;
+  const rOn = mine && ov.rOn !== undefined ? ov.rOn : p.gate.rTurnOn;
+  const rOff = mine && ov.rOff !== undefined ? ov.rOff : p.gate.rTurnOff;
   const k = mine && ov.qgScale !== undefined ? ov.qgScale : 1;
   const m = p.mosfet;
   const n = m.count;

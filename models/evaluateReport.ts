@@ -8,6 +8,7 @@ import { LOSS_MECHANISMS, type Losses } from "./losses";
 import type { PartKind } from "./partIds";
 import { NM, type Prepared } from "./evaluateCore";
 import { rdsAt } from "./conduction";
+import { outputCapacitanceBasis, type OutputCapacitanceBasis } from "./switching";
 
 export type JunctionState =
   | { runaway: false; tj: number; tjMax: number; limit: number; margin: number }
@@ -51,6 +52,8 @@ export interface PositionResult {
   rdsOn: number | null;
   /** Waveform values used at this corner. */
   waveform: { vdsOn: number; idOn: number; vdsOff: number; idOff: number; iRms: number; iAvg: number; duty: number };
+  /** Which output-capacitance figure the Eoss estimate used and why; null when the MOSFET gives none. */
+  outputCapacitance: OutputCapacitanceBasis | null;
 }
 
 export interface CornerResult {
@@ -115,6 +118,7 @@ export function buildCornerResult(prep: Prepared): CornerResult {
       turnOff: edge(w.turnOff),
       rdsOn: channel && !prep.runaway[pp.part] ? rdsAt(pp.position.mosfet, prep.tj[pp.part]) : null,
       waveform: { ...w.waveform },
+      outputCapacitance: outputCapacitanceBasis(pp.position.mosfet.outputCapacitance),
     };
   });
   const totalLoss = partResults.reduce((s, p) => s + p.total, 0);

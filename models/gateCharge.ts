@@ -5,7 +5,7 @@
  *  - 0 … Vpl: linear, reaching Qgs at the plateau (a constant Ciss-like
  *    slope Qgs/Vpl; the real curve is slightly concave, ignored);
  *  - at Vpl: a flat plateau worth Qgd (the Miller charge);
- *  - above Vpl: linear to Qg at the test voltage vTest, extrapolated beyond;
+ * *  - above Vpl: linear to Qg at its test gate voltage qgVgs, extrapolated beyond;
  *  - below 0 V (negative bias): slope Ciss. With no Ciss given we take
  *    Qgs/Vpl, i.e. the same slope as below the plateau, because at negative
  *    Vgs the channel is off and the gate sees Cgs + Cgd(at high Vds), the
@@ -21,7 +21,7 @@ export interface GateChargeCurve {
   qgs: number;
   qgd: number;
   qg: number;
-  vTest: number;
+  qgVgs: number;
   vth: number;
   vpl: number;
   ciss?: number;
@@ -40,7 +40,7 @@ export function chargeAt(c: GateChargeCurve, vgs: number): number {
   if (vgs <= 0) return negativeSlope(c) * vgs;
   const vpl = Math.max(c.vpl, 1e-9);
   if (vgs <= vpl) return (c.qgs * vgs) / vpl;
-  const above = Math.max(c.qg - c.qgs - c.qgd, 0) / Math.max(c.vTest - vpl, 1e-9);
+  const above = Math.max(c.qg - c.qgs - c.qgd, 0) / Math.max(c.qgVgs - vpl, 1e-9);
   return c.qgs + c.qgd + above * (vgs - vpl);
 }
 

@@ -62,8 +62,8 @@ export function buildParts(design: Design): PartDef[] {
     const d = p.drive;
     const driven = p.conduction.mode === "channel" && d.kind !== "none";
     if (!driven) return;
-    add(".rgOn", `${p.id} gate resistor (on)`, "resistor", null, `${el}.gate.rOn`);
-    if (p.gate.rOff !== undefined || p.gate.steeringDiode) add(".rgOff", `${p.id} gate resistor (off)`, "resistor", null, `${el}.gate.rOff`);
+    add(".rgOn", `${p.id} gate resistor (on)`, "resistor", null, `${el}.gate.rTurnOn`);
+    if (p.gate.rTurnOff !== undefined || p.gate.steeringDiode) add(".rgOff", `${p.id} gate resistor (off)`, "resistor", null, `${el}.gate.rTurnOff`);
     if (d.kind === "bjt-follower") {
       add(".npn", `${p.id} NPN ${d.npn.partNumber ?? ""}`.trim(), "bjt", junction(design, "bjt", d.npn.rthJA, d.npn.tjMax, `${el}.drive.npn.rthJA`), `${el}.drive.npn`);
       add(".pnp", `${p.id} PNP ${d.pnp.partNumber ?? ""}`.trim(), "bjt", junction(design, "bjt", d.pnp.rthJA, d.pnp.tjMax, `${el}.drive.pnp.rthJA`), `${el}.drive.pnp`);

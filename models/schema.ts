@@ -3,9 +3,11 @@
  * the model computes on (SI numbers). One schema serves the browser form,
  * the API and the file import.
  *
- * Layout: name, corners[], controller, positions[] (each a MOSFET with its
- * drive stage, gate network and waveforms), thermal.coupling[], derating.
- * See schemaOperating.ts for how corners pick waveform values.
+ * Layout: schemaVersion, name, corners[], controller, positions[] (each a
+ * MOSFET with its drive stage, gate network and waveforms),
+ * thermal.coupling[], derating. See schemaOperating.ts for how corners pick
+ * waveform values, schemaUpgrade.ts for the versions: a document without
+ * `schemaVersion` is version 1 and is upgraded before validation.
  */
 import { z } from "zod";
 import { qty } from "./units";
@@ -13,6 +15,7 @@ import { controllerSchema, mosfetSchema } from "./schemaParts";
 import { driveSchema, gateSchema } from "./schemaDrive";
 import { conductionSchema, cornerSchema } from "./schemaOperating";
 import { junctionPartIds, POSITION_ID_PATTERN } from "./partIds";
+import { CURRENT_SCHEMA_VERSION, upgradeDesignDocument } from "./schemaUpgrade";
 import {
   DEFAULT_MIN_HEADROOM_ABOVE_PLATEAU_V,
   DEFAULT_TJ_MARGIN_K,
@@ -64,8 +67,12 @@ const DEFAULT_DERATING = {
   minHeadroomAbovePlateau: DEFAULT_MIN_HEADROOM_ABOVE_PLATEAU_V,
 };
 
-export const designInputSchema = z
+/** The current (version 2) document, as validated after any upgrade. */
+export const designDocumentV2Schema = z
   .object({
+    schemaVersion: z.literal(CURRENT_SCHEMA_VERSION, {
+      error: `this server reads design documents of version 1 (no schemaVersion) and ${CURRENT_SCHEMA_VERSION}`,
+    }),
     name: z.string().min(1).max(200),
     description: z.string().max(4000).optional(),
     corners: z.array(cornerSchema).min(1).max(50),
@@ -103,10 +110,17 @@ export const designInputSchema = z
     });
   });
 
-/** What a user writes: numbers in SI or unit strings. */
-export type DesignInput = z.input<typeof designInputSchema>;
+/**
+ * Any version of the document in, the current version's parse out: the
+ * upgrade runs first, so the API, the editor and stored revisions share one
+ * path. Issue paths are those of the current version.
+ */
+export const designInputSchema = z.preprocess((raw) => upgradeDesignDocument(raw).document, designDocumentV2Schema);
+
+/** What a user writes (current version): numbers in SI or unit strings. */
+export type DesignInput = z.input<typeof designDocumentV2Schema>;
 /** What the model computes on: every quantity an SI number, defaults filled. */
-export type Design = z.output<typeof designInputSchema>;
+export type Design = z.output<typeof designDocumentV2Schema>;
 export type Position = Design["positions"][number];
 export type Corner = Design["corners"][number];
 
@@ -127,7 +141,7 @@ export function parseDesign(raw: unknown): ParseResult {
   };
 }
 
-/** JSON Schema of the input document (unit strings visible), for editors and the API docs. */
+/** JSON Schema of the current input document (unit strings visible), for editors and the API docs. */
 export function designJsonSchema(): object {
-  return z.toJSONSchema(designInputSchema, { io: "input", unrepresentable: "any" });
+  return z.toJSONSchema(designDocumentV2Schema, { io: "input", unrepresentable: "any" });
 }

@@ -108,16 +108,16 @@ export const driveSchema = z.discriminatedUnion("kind", [
 
 /**
  * External gate network. Without a steering diode the turn-on edge goes
- * through rOn and the turn-off edge through rOff (split driver outputs;
- * rOff defaults to rOn = one resistor). With a steering diode we take the
- * common layout "rOff in series with the diode, both across rOn": turn-off
- * sees rOn ∥ rOff, and the diode's Vf offsets the rOff branch (its Thevenin
- * equivalent, see driveStage.ts).
+ * through rTurnOn and the turn-off edge through rTurnOff (split driver
+ * outputs; rTurnOff defaults to rTurnOn = one resistor). With a steering
+ * diode we take the common layout "rTurnOff in series with the diode, both
+ * across rTurnOn": turn-off sees rTurnOn ∥ rTurnOff, and the diode's Vf
+ * offsets the rTurnOff branch (its Thevenin equivalent, see driveCommon.ts).
  */
 export const gateSchema = z
   .object({
-    rOn: qty("resistance"),
-    rOff: qty("resistance").optional(),
+    rTurnOn: qty("resistance"),
+    rTurnOff: qty("resistance").optional(),
     steeringDiode: z.object({ vf: qty("voltage", { min: 0, max: 5 }).default(D.steeringDiodeVf) }).strict().optional(),
     cost: qty("cost").optional(),
   })

@@ -5,7 +5,7 @@
  *  1. A position lists waveform `points`, each at an input voltage `vin`,
  *     all at full load. At a corner the values are interpolated linearly in
  *     Vin between neighbouring points and held flat outside the range.
- *  2. Currents (idOn, idOff, iRms, iAvg) are multiplied by the corner's
+ *  2. Currents (turnOnId, turnOffId, iRms, iAvg) are multiplied by the corner's
  *     `loadFraction` (a CCM converter's currents scale with load; voltages
  *     and duty are taken as load-independent, which ignores the small duty
  *     shift from losses).
@@ -19,13 +19,13 @@ import { AMBIENT_RANGE_C, FSW_RANGE_HZ } from "./bounds";
 
 export const waveformFields = {
   /** Drain-source voltage just before the turn-on edge. */
-  vdsOn: qty("voltage", { min: 0 }),
+  turnOnVds: qty("voltage", { min: 0 }),
   /** Drain current just after the turn-on edge. */
-  idOn: qty("current", { min: 0 }),
+  turnOnId: qty("current", { min: 0 }),
   /** Drain-source voltage the switch rises to at turn-off. */
-  vdsOff: qty("voltage", { min: 0 }),
+  turnOffVds: qty("voltage", { min: 0 }),
   /** Drain current at the turn-off edge. */
-  idOff: qty("current", { min: 0 }),
+  turnOffId: qty("current", { min: 0 }),
   /** RMS of the channel current over the whole switching period. */
   iRms: qty("current", { min: 0 }),
   /** Average of the current through the device (for diode conduction). */

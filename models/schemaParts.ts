@@ -51,23 +51,26 @@ export const controllerSchema = z
   .strict();
 
 /**
- * Output capacitance, one figure at a test voltage. The loss uses Eoss(V);
- * from Qoss or Coss it is derived assuming an abrupt junction,
- * Coss ∝ 1/√V (Baliga 2nd ed. 2019, MOSFET capacitances; from memory), so
+ * Output capacitance at one test Vds: any of Eoss, Qoss and Coss, as the
+ * datasheet prints them. The loss needs Eoss(V), so the model uses Eoss when
+ * given, else Qoss, else Coss (see eossAt in switching.ts); from Qoss or
+ * Coss it is derived assuming an abrupt junction, Coss ∝ 1/√V (Baliga 2nd
+ * ed. 2019, MOSFET capacitances; from memory), so
  * Eoss(V) = Eoss(Vt)·(V/Vt)^1.5, Eoss = Qoss·V/3 and Eoss(Vt) = ⅔·Coss(Vt)·Vt².
  * Superjunction parts deviate; give Eoss when the datasheet has it.
  */
 export const outputCapacitanceSchema = z
   .object({
     /** ≥ 1 V: the V^1.5 scaling from a lower test voltage is meaningless. */
-    vTest: qty("voltage", { min: 1 }),
+    vds: qty("voltage", { min: 1 }),
     eoss: qty("energy").optional(),
     qoss: qty("charge").optional(),
     coss: qty("capacitance").optional(),
   })
   .strict()
-  .refine((c) => [c.eoss, c.qoss, c.coss].filter((x) => x !== undefined).length === 1, {
-    message: "give exactly one of eoss, qoss or coss at vTest",
+  .refine((c) => c.eoss !== undefined || c.qoss !== undefined || c.coss !== undefined, {
+    message: "give at least one of Eoss, Qoss or Coss at the test voltage",
+    path: ["eoss"],
   });
 
 export const mosfetSchema = z
@@ -79,13 +82,14 @@ export const mosfetSchema = z
     qgs: qty("charge", { gt: 0 }),
     qgd: qty("charge", { min: 0 }),
     qg: qty("charge", { gt: 0 }),
-    /** Vgs at which Qg is specified. */
-    vTest: qty("voltage", { gt: 0 }).default(D.qgTestVoltage),
+    /** Gate voltage at which the datasheet's Qg figure is specified. */
+    qgVgs: qty("voltage", { gt: 0 }).default(D.qgTestVoltage),
     vth: qty("voltage", { min: 0.1 }),
     vpl: qty("voltage", { min: 0.2 }),
     /** Slope of Q(Vgs) below 0 V; default Qgs/Vpl (see gateCharge.ts). */
     ciss: qty("capacitance", { gt: 0 }).optional(),
-    rgInt: qty("resistance", { gt: 0 }).default(D.rgInt),
+    /** Internal gate resistance; 0 is allowed (a part whose Rg is lumped into the external resistor). */
+    rgInt: qty("resistance", { min: 0 }).default(D.rgInt),
     outputCapacitance: outputCapacitanceSchema.optional(),
     /** This part's own body-diode reverse-recovery charge (used for SRs). */
     qrr: qty("charge").default(0),
@@ -109,8 +113,8 @@ export const mosfetSchema = z
   .superRefine((m, ctx) => {
     const issue = (path: string, message: string) => ctx.addIssue({ code: "custom", path: [path], message });
     if (!(m.vth < m.vpl)) issue("vth", "Vth must be below the plateau voltage (vpl)");
-    if (!(m.vpl + 0.1 <= m.vTest)) issue("vpl", "the plateau Vpl must be at least 0.1 V below the Qg test voltage vTest");
-    if (m.qg < m.qgs + m.qgd) issue("qg", "Qg at vTest must be at least Qgs + Qgd");
+    if (!(m.vpl + 0.1 <= m.qgVgs)) issue("vpl", "the plateau Vpl must be at least 0.1 V below the Qg test gate voltage (qgVgs)");
+    if (m.qg < m.qgs + m.qgd) issue("qg", "Qg at its test gate voltage must be at least Qgs + Qgd");
     const chain = m.rthJC !== undefined || m.rthCS !== undefined || m.rthSA !== undefined;
     if (m.rthJA === undefined && !chain) issue("rthJA", "give rthJA, or rthJC + rthCS + rthSA");
     if (m.rthJA !== undefined && chain) issue("rthJA", "give either rthJA or the rthJC/rthCS/rthSA chain, not both");

@@ -130,7 +130,7 @@ function buildSlots(nominal: Design, work: Design, defaults: "common-practice" |
     });
     // Vth moves with the plateau (both set by the same threshold implant); kept inside (0, Vpl).
     add(id, t, "vpl", (f) => {
-      wm.vpl = Math.min(nm.vpl * f, 0.99 * nm.vTest);
+      wm.vpl = Math.min(nm.vpl * f, 0.99 * nm.qgVgs);
       wm.vth = Math.min(Math.max(nm.vth + (wm.vpl - nm.vpl), 0.05), 0.99 * wm.vpl);
     });
     add(id, t, "resistance", (f) => (wm.rgInt = nm.rgInt * f));

@@ -40,7 +40,7 @@ export function nominal(axis: SweepAxis, design: Design, ci: number): number {
     case "qgScale": return 1;
     case "rGate": {
       const g = design.positions.find((p) => p.id === axis.position)!.gate;
-      return axis.edge === "off" ? (g.rOff ?? g.rOn) : g.rOn;
+      return axis.edge === "off" ? (g.rTurnOff ?? g.rTurnOn) : g.rTurnOn;
     }
   }
 }
@@ -75,7 +75,7 @@ export function stageKnobs(design: Design, rAxis: SweepAxis | null, vin: number,
   if (!rAxis) return { vin, rGate: null };
   const g = design.positions.find((p) => p.id === rAxis.position)!.gate;
   const edge = rAxis.edge ?? "both";
-  const rOn = edge === "off" ? g.rOn : r;
-  const rOff = edge === "off" ? r : edge === "on" ? g.rOff : g.rOff === undefined ? undefined : g.rOn > 0 ? (g.rOff * r) / g.rOn : g.rOff;
+  const rOn = edge === "off" ? g.rTurnOn : r;
+  const rOff = edge === "off" ? r : edge === "on" ? g.rTurnOff : g.rTurnOff === undefined ? undefined : g.rTurnOn > 0 ? (g.rTurnOff * r) / g.rTurnOn : g.rTurnOff;
   return { vin, rGate: { position: rAxis.position!, rOn, rOff } };
 }

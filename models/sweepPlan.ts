@@ -63,8 +63,8 @@ export function buildPlan(prep: Prepared, ci: number, knobs: StageKnobs, scaled:
     const n = m.count;
     const w = cornerWaveform(p, corner, knobs.vin);
     const mine = knobs.rGate !== null && knobs.rGate.position === p.id;
-    const rOn = mine ? knobs.rGate!.rOn : p.gate.rOn;
-    const rOff = mine ? knobs.rGate!.rOff : p.gate.rOff;
+    const rOn = mine ? knobs.rGate!.rOn : p.gate.rTurnOn;
+    const rOff = mine ? knobs.rGate!.rOff : p.gate.rTurnOff;
     const st = driveStage({ controller: design.controller, position: p, positionIndex: pp.index, vin: knobs.vin, duty: w.duty, rOn, rOff });
     const k = scaled(p.id);
     const perK = k ? cKF : cF;

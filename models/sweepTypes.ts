@@ -17,8 +17,8 @@ export interface SweepAxis {
   /** qgScale: the position whose MOSFET curve is scaled (omitted = every position). rGate: required. */
   position?: string;
   /**
-   * rGate only. "both" (default): the axis value is rOn and rOff keeps its
-   * ratio to rOn (or follows rOn when the design has one resistor);
+   * rGate only. "both" (default): the axis value is rTurnOn and rTurnOff keeps its
+   * ratio to rTurnOn (or follows it when the design has one resistor);
    * "on" / "off": only that resistor, the axis value is its resistance.
    */
   edge?: "both" | "on" | "off";

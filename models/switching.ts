@@ -50,18 +50,45 @@ export function hardEdge({ vds, id, iGate, qgd, qgs2, fsw }: {
 }
 
 export interface OutputCapacitance {
-  vTest: number;
+  /** Test Vds of the figures. */
+  vds: number;
   eoss?: number;
   qoss?: number;
   coss?: number;
 }
 
+export type OutputCapacitanceFigure = "eoss" | "qoss" | "coss";
+
+/** Which datasheet figure the Eoss(V) estimate starts from, and why (reported per position). */
+export interface OutputCapacitanceBasis {
+  figure: OutputCapacitanceFigure;
+  reason: string;
+}
+
+/**
+ * Eoss is what the loss needs, so it wins when given; Qoss comes next (one
+ * conversion, Eoss = Qoss·V/3), Coss last (Eoss = ⅔·Coss·V²), both under
+ * the Coss ∝ V^−½ assumption of schemaParts.ts.
+ */
+export function outputCapacitanceBasis(oc: OutputCapacitance | undefined): OutputCapacitanceBasis | null {
+  if (!oc) return null;
+  const given = (["eoss", "qoss", "coss"] as const).filter((k) => oc[k] !== undefined);
+  const others = (skip: string) => given.filter((k) => k !== skip).map((k) => k.charAt(0).toUpperCase() + k.slice(1));
+  const also = (skip: string) => (others(skip).length ? ` (${others(skip).join(" and ")} also given, not needed)` : "");
+  if (oc.eoss !== undefined) return { figure: "eoss", reason: `Eoss is the energy the loss needs, used as given${also("eoss")}` };
+  if (oc.qoss !== undefined)
+    return { figure: "qoss", reason: `no Eoss given: Eoss = Qoss·Vds/3, assuming Coss ∝ Vds^-1/2${also("qoss")}` };
+  if (oc.coss !== undefined) return { figure: "coss", reason: "no Eoss or Qoss given: Eoss = ⅔·Coss·Vds², assuming Coss ∝ Vds^-1/2" };
+  return null;
+}
+
 /**
  * Eoss at V for one device, scaled from the datasheet figure assuming an
  * abrupt junction, Coss ∝ V^−½ (see schemaParts.ts): Eoss ∝ V^1.5.
+ * The figure used is the one outputCapacitanceBasis names.
  */
 export function eossAt(oc: OutputCapacitance | undefined, v: number): number {
   if (!oc || !(v > 0)) return 0;
-  const atTest = oc.eoss ?? (oc.qoss !== undefined ? (oc.qoss * oc.vTest) / 3 : ((oc.coss ?? 0) * 2 * oc.vTest * oc.vTest) / 3);
-  return atTest * Math.pow(v / oc.vTest, 1.5);
+  const atTest = oc.eoss ?? (oc.qoss !== undefined ? (oc.qoss * oc.vds) / 3 : ((oc.coss ?? 0) * 2 * oc.vds * oc.vds) / 3);
+  return atTest * Math.pow(v / oc.vds, 1.5);
 }

@@ -82,7 +82,7 @@ export function cornerWarnings(prep: Prepared, result: CornerResult): Warning[] 
       add({
         code: "edge-too-slow", severity: "error", partId: p.id,
         message: `${p.id} ${name} would take longer than half a switching period ${where}: the gate current on the plateau is too small. The loss shown is capped and not trustworthy.`,
-        element: `${el}.gate.${name === "turn-on" ? "rOn" : "rOff"}`,
+        element: `${el}.gate.${name === "turn-on" ? "rTurnOn" : "rTurnOff"}`,
       });
     }
     for (const t of st.transistors) {

@@ -5,11 +5,13 @@
  *   param.<key> ... (unit strings such as "47 nC"; hFE as "0.1 A: 220; 1 A: 150"),
  *   tol.<key> ...   (relative spread: "0.1" or "10 %")
  *
- * Rows are numbered as a spreadsheet shows them: the header is row 1, the
- * first part row 2. Every row is validated; an import writes all rows or none.
+ * Old parameter names (design-document version 1, e.g. param.vTest) are
+ * read as aliases of the current ones (param.qgVgs); the export writes the
+ * current names. Rows are numbered as a spreadsheet shows them: the header
+ * is row 1, the first part row 2. Every row is validated; an import writes all rows or none.
  */
 import Papa from "papaparse";
-import { PART_KIND_DEFS, allParamKeys, allToleranceKeys, type ParamField } from "./partKinds";
+import { PART_KIND_DEFS, allParamAliases, allParamKeys, allToleranceKeys, type ParamField } from "./partKinds";
 import { formatExact, formatHfeCurve, formatVoltSecond, type HfePoint } from "./partParamText";
 import { getPath, validatePartDraft, type PartValues } from "./partValues";
 
@@ -49,7 +51,8 @@ export function columnOfPath(path: string): string {
 }
 
 function knownColumns(): Set<string> {
-  return new Set<string>([...BASE_COLUMNS, ...allParamKeys().map((k) => PARAM_PREFIX + k), ...allToleranceKeys().map((k) => TOL_PREFIX + k)]);
+  const params = [...allParamKeys(), ...Object.keys(allParamAliases())];
+  return new Set<string>([...BASE_COLUMNS, ...params.map((k) => PARAM_PREFIX + k), ...allToleranceKeys().map((k) => TOL_PREFIX + k)]);
 }
 
 /** A CSV row (header -> cell) as a draft for validatePartDraft. */

@@ -85,11 +85,11 @@ export const PART_KIND_DEFS: Record<PartKind, KindDefinition> = {
       q("qg", "Qg", "charge", true),
       q("qgs", "Qgs", "charge", true),
       q("qgd", "Qgd", "charge", true),
-      q("vTest", "Qg test Vgs", "voltage", false, { hint: "default 10 V" }),
+      q("qgVgs", "Qg test Vgs", "voltage", false, { hint: "default 10 V" }),
       q("vth", "Vth", "voltage", true),
       q("vpl", "Vpl (Miller plateau)", "voltage", true),
       q("ciss", "Ciss", "capacitance", false),
-      q("rgInt", "Rg(int)", "resistance", false, { hint: "default 1 Ω" }),
+      q("rgInt", "Rg(int)", "resistance", false, { hint: "default 1 Ω; 0 allowed" }),
       q("rds25", "Rds(on) at 25 °C", "resistance", true),
       q("rdsHot", "Rds(on) hot", "resistance", false, { hint: "default 1.7 × Rds(on) at 125 °C" }),
       q("tHot", "Rds(on) hot temperature", "temperature", false),
@@ -103,7 +103,7 @@ export const PART_KIND_DEFS: Record<PartKind, KindDefinition> = {
       q("rthJC", "RθJC", "thermalResistance", false),
       q("rthCS", "RθCS", "thermalResistance", false),
       q("rthSA", "RθSA", "thermalResistance", false),
-      q("outputCapacitance.vTest", "Coss/Qoss/Eoss test Vds", "voltage", false),
+      q("outputCapacitance.vds", "Coss/Qoss/Eoss test Vds", "voltage", false, { hint: "give any of Eoss, Qoss, Coss at it" }),
       q("outputCapacitance.eoss", "Eoss", "energy", false),
       q("outputCapacitance.qoss", "Qoss", "charge", false),
       q("outputCapacitance.coss", "Coss", "capacitance", false),
@@ -173,6 +173,20 @@ export const PART_KIND_DEFS: Record<PartKind, KindDefinition> = {
     tolerances: ["resistance"],
   },
 };
+
+/**
+ * Parameter keys of design-document version 1 (models/schemaUpgrade.ts),
+ * still accepted as aliases of the current keys (CSV columns, API params)
+ * because users keep files in the old names; exports write the new ones.
+ */
+export const PARAM_KEY_ALIASES: Partial<Record<PartKind, Readonly<Record<string, string>>>> = {
+  mosfet: { vTest: "qgVgs", "outputCapacitance.vTest": "outputCapacitance.vds" },
+};
+
+/** Every alias key of any kind -> the current key (the CSV columns), first kind wins. */
+export function allParamAliases(): Record<string, string> {
+  return Object.assign({}, ...PART_KINDS.map((k) => PARAM_KEY_ALIASES[k] ?? {}).reverse());
+}
 
 export function isPartKind(value: unknown): value is PartKind {
   return typeof value === "string" && (PART_KINDS as readonly string[]).includes(value);

@@ -10,7 +10,7 @@
 import { z } from "zod";
 import { qty } from "@/models/units";
 import { bjtSchema, controllerSchema, driverIcSchema, mosfetSchema } from "@/models/schemaParts";
-import { PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, isPartKind, type ParamField, type PartKind, type ToleranceKey } from "./partKinds";
+import { PARAM_KEY_ALIASES, PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, isPartKind, type ParamField, type PartKind, type ToleranceKey } from "./partKinds";
 import { parseHfeCurve, parseVoltSecond, snap } from "./partParamText";
 import { getPath, setPath } from "./paramPaths";
 
@@ -101,8 +101,26 @@ function snapDeep(v: unknown): unknown {
   return v;
 }
 
-function validateParams(kind: PartKind, given: Record<string, unknown>, issues: PartIssue[]): PartParams {
+/** Old key names (PARAM_KEY_ALIASES) moved to the current ones; both given is refused. */
+function withAliasesResolved(kind: PartKind, raw: Record<string, unknown>, issues: PartIssue[]): Record<string, unknown> {
+  const aliases = PARAM_KEY_ALIASES[kind];
+  if (!aliases) return raw;
+  const out: Record<string, unknown> = { ...raw };
+  for (const [old, key] of Object.entries(aliases)) {
+    if (isBlank(raw[old])) {
+      delete out[old];
+      continue;
+    }
+    if (!isBlank(raw[key])) issues.push({ path: `params.${old}`, message: `${old} is the old name of ${key}; give only one of them` });
+    else out[key] = raw[old];
+    delete out[old];
+  }
+  return out;
+}
+
+function validateParams(kind: PartKind, rawGiven: Record<string, unknown>, issues: PartIssue[]): PartParams {
   const def = PART_KIND_DEFS[kind];
+  const given = withAliasesResolved(kind, rawGiven, issues);
   const params: PartParams = {};
   const modelInput: Record<string, unknown> = {};
   const modelKeys: ParamField[] = [];

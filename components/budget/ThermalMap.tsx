@@ -27,7 +27,7 @@ type Result = { xs: number[]; ys: number[]; z: (number | null)[][]; contour: Poi
 export function axisRange(design: Design, key: SweepAxisKey, positionId: string, cornerId: string, steps: number): SweepAxis {
   const c = design.corners.find((k) => k.id === cornerId) ?? design.corners[0];
   const vins = design.corners.map((k) => k.vin);
-  const rOn = design.positions.find((p) => p.id === positionId)?.gate.rOn ?? 0;
+  const rOn = design.positions.find((p) => p.id === positionId)?.gate.rTurnOn ?? 0;
   const span: Record<SweepAxisKey, [number, number]> = {
     fsw: [c.fsw * 0.4, c.fsw * 2.5],
     qgScale: [0.5, 2],

@@ -3,7 +3,7 @@
  * fields (parsed design, USD). The chain is everything the gate drive
  * decision touches: the controller, each MOSFET (times its parallel count),
  * buffer transistors, driver ICs, gate transformer, clamp and zener, and the
- * gate network (rOn; rOff and the steering diode when present). Parts
+ * gate network (rTurnOn; rTurnOff and the steering diode when present). Parts
  * without a cost are counted and named in `missingCost`, so a total that
  * leaves something out says so. Pure.
  */
@@ -41,7 +41,7 @@ export function driveChainBill(design: Design): DriveChainBill {
     } else if (d.kind === "self-driven" && d.clamp) add(`${p.id} clamp (transistor and zener)`, d.clamp.cost, 2, 1);
     if (d.kind !== "none") {
       // The gate network's one cost covers all of its parts.
-      const n = 1 + (p.gate.rOff !== undefined ? 1 : 0) + (p.gate.steeringDiode ? 1 : 0);
+      const n = 1 + (p.gate.rTurnOff !== undefined ? 1 : 0) + (p.gate.steeringDiode ? 1 : 0);
       add(`${p.id} gate network`, p.gate.cost, n, 1);
     }
   }

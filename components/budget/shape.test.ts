@@ -66,8 +66,8 @@ describe("junctions and the controller", () => {
 
 describe("links and words", () => {
   it("points the editor at the element", () => {
-    expect(editorHref({ projectId: "p1", optionId: "o1", element: "positions.0.gate.rOn" })).toBe(
-      "/projects/p1/options/o1?element=positions.0.gate.rOn#positions.0.gate.rOn",
+    expect(editorHref({ projectId: "p1", optionId: "o1", element: "positions.0.gate.rTurnOn" })).toBe(
+      "/projects/p1/options/o1?element=positions.0.gate.rTurnOn#positions.0.gate.rTurnOn",
     );
     expect(elementWords("positions.1.drive.npn.hfe", ["Q1", "SR1"])).toBe("SR1 · drive · npn · hfe");
     expect(elementWords("controller.vcc", [])).toBe("controller · vcc");
@@ -109,8 +109,8 @@ describe("what-if knobs", () => {
     const parsed = parseDesign(next);
     if (!parsed.ok) throw new Error("does not parse");
     const g = parsed.design.positions[0].gate;
-    expect(g.rOn).toBeCloseTo((k.rOn ?? 1) * 2, 9);
-    if (d.positions[0].gate.rOff !== undefined) expect(g.rOff! / g.rOn).toBeCloseTo(d.positions[0].gate.rOff / d.positions[0].gate.rOn, 9);
+    expect(g.rTurnOn).toBeCloseTo((k.rOn ?? 1) * 2, 9);
+    if (d.positions[0].gate.rTurnOff !== undefined) expect(g.rTurnOff! / g.rTurnOn).toBeCloseTo(d.positions[0].gate.rTurnOff / d.positions[0].gate.rTurnOn, 9);
   });
 
   it("changes the evaluated numbers", () => {

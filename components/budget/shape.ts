@@ -130,7 +130,7 @@ export function editorHref({ projectId, optionId, element }: { projectId: string
   return element ? `${base}?element=${encodeURIComponent(element)}#${encodeURIComponent(element)}` : base;
 }
 
-/** Human words for an element path: "positions.0.gate.rOn" -> "Q1 gate · rOn". */
+/** Human words for an element path: "positions.0.gate.rTurnOn" -> "Q1 gate · rTurnOn". */
 export function elementWords(element: string, positionIds: readonly string[]): string {
   const parts = element.split(".");
   if (parts[0] === "positions" && /^\d+$/.test(parts[1] ?? "")) {

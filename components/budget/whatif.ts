@@ -14,7 +14,7 @@
  *    factor, the ambient shifted by one offset, so the corner structure
  *    (e.g. a cold light-load corner) is kept. The knob shows the value of
  *    the reference corner (fsw: the first corner; ambient: the hottest).
- *  - gate resistance: the chosen position's rOn; a separate rOff is scaled
+ *  - gate resistance: the chosen position's rTurnOn; a separate rTurnOff is scaled
  *    by the same factor so the on/off ratio is kept.
  *  - drive voltage: the rail that sets the chosen position's gate high
  *    level: its driver or follower `supply` when given, a DC-restored
@@ -52,7 +52,7 @@ export function knobTargets(design: Design, positionIndex: number): KnobTargets 
   else if (d.kind === "transformer" && d.mode === "dc-restored") driveElement = `${base}.vPos`;
   else if (d.kind === "transformer" && d.driver?.supply !== undefined) driveElement = `${base}.driver.supply`;
   else if (d.kind === "self-driven" || d.kind === "none") driveElement = null;
-  return { positionIndex, positionId: p.id, driveElement, rOnElement: `positions.${positionIndex}.gate.rOn` };
+  return { positionIndex, positionId: p.id, driveElement, rOnElement: `positions.${positionIndex}.gate.rTurnOn` };
 }
 
 function get(design: unknown, path: string): number | undefined {
@@ -69,7 +69,7 @@ export function readKnobs(design: Design, t: KnobTargets): Knobs {
   return {
     fsw: design.corners[0].fsw,
     ambient: Math.max(...design.corners.map((c) => c.ambient)),
-    rOn: design.positions[t.positionIndex].gate.rOn,
+    rOn: design.positions[t.positionIndex].gate.rTurnOn,
     driveVoltage: t.driveElement ? (get(design, t.driveElement) ?? null) : null,
   };
 }
@@ -106,7 +106,7 @@ export function applyKnobs(document: unknown, design: Design, t: KnobTargets, kn
   const gate = design.positions[t.positionIndex].gate;
   if (knobs.rOn !== null && now.rOn !== null && knobs.rOn !== now.rOn) {
     setNumber(doc, t.rOnElement, knobs.rOn);
-    if (gate.rOff !== undefined && now.rOn > 0) setNumber(doc, `positions.${t.positionIndex}.gate.rOff`, (gate.rOff * knobs.rOn) / now.rOn);
+    if (gate.rTurnOff !== undefined && now.rOn > 0) setNumber(doc, `positions.${t.positionIndex}.gate.rTurnOff`, (gate.rTurnOff * knobs.rOn) / now.rOn);
   }
   if (t.driveElement && knobs.driveVoltage !== null && knobs.driveVoltage !== now.driveVoltage) setNumber(doc, t.driveElement, knobs.driveVoltage);
   return doc;

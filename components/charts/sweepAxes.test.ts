@@ -16,7 +16,7 @@ describe("toModelSpec", () => {
     cornerId: corner.id,
     positionId: design.positions[0].id,
     x: { key: "fsw", from: corner.fsw / 2, to: corner.fsw, steps: 3 },
-    y: { key: "rGate", from: 1, to: design.positions[0].gate.rOn, steps: 2 },
+    y: { key: "rGate", from: 1, to: design.positions[0].gate.rTurnOn, steps: 2 },
   };
 
   it("names the position for rGate, not for the controller's qgScale", () => {

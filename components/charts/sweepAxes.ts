@@ -14,7 +14,7 @@ export const AXIS_INFO: Record<SweepAxisKey, { title: string; unit: string }> = 
   qgScale: { title: "Gate charge, × datasheet Qg", unit: "×" },
   vin: { title: "Input voltage (V)", unit: "V" },
   ambient: { title: "Ambient (°C)", unit: "°C" },
-  rGate: { title: "Gate resistor rOn (Ω)", unit: "Ω" },
+  rGate: { title: "Gate resistor rTurnOn (Ω)", unit: "Ω" },
 };
 
 export interface SweepAxis {

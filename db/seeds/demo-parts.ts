@@ -14,9 +14,9 @@ import { flattenParams, validatePartDraft, type PartDraft, type PartValues } fro
 import type { PartKind } from "../../app/_lib/partKinds";
 
 const MAKER_BY_PREFIX: [RegExp, string][] = [
-  [/^HSC-|^HSD-/, "Harrowgate Silicon (demo)"],
+  [/^HRG-/, "Harrowgate Silicon (demo)"],
   [/^QN-|^QT-|^QZ-|^QD-/, "Quillmere Devices (demo)"],
-  [/^HGT-/, "Greywell Magnetics (demo)"],
+  [/^GRW-/, "Greywell Magnetics (demo)"],
 ];
 
 function makerOf(mpn: string): string {
@@ -53,7 +53,7 @@ function draftOf(p: DemoPart): PartDraft | null {
 /** Library-only demo parts beyond what the options use (invented). */
 const EXTRA_DRAFTS: PartDraft[] = [
   {
-    kind: "diode", manufacturer: makerOf("QD-"), mpn: "QD-4148F", description: "Fast switching diode for gate steering, SOD-323 (invented demo part)",
+    kind: "diode", manufacturer: makerOf("QD-"), mpn: "QD-SW75", description: "Fast switching diode for gate steering, SOD-323 (invented demo part)",
     unitCost: "0.01", params: { vf: "0.7 V", ifTest: "10 mA", vrrm: "75 V", trr: "4 ns", rthJA: "500 K/W", tjMax: "150 °C" }, tolerance: {},
   },
   {
@@ -63,11 +63,11 @@ const EXTRA_DRAFTS: PartDraft[] = [
   {
     kind: "mosfet", manufacturer: makerOf("QN-"), mpn: "QN-100L7", description: "100 V 7 mΩ logic-level N-channel MOSFET (invented demo part)",
     unitCost: "0.85",
-    params: { vdsMax: "100 V", qg: "28 nC", qgs: "7 nC", qgd: "6 nC", vTest: "4.5 V", vth: "1.8 V", vpl: "3 V", rgInt: "0.9 Ω", rds25: "7 mΩ", rdsHot: "12 mΩ", vgsMax: "16 V", rthJA: "45 K/W" },
+    params: { vdsMax: "100 V", qg: "28 nC", qgs: "7 nC", qgd: "6 nC", qgVgs: "4.5 V", vth: "1.8 V", vpl: "3 V", rgInt: "0.9 Ω", rds25: "7 mΩ", rdsHot: "12 mΩ", vgsMax: "16 V", rthJA: "45 K/W" },
     tolerance: { qg: 0.15, rdsOn: 0.2 },
   },
   {
-    kind: "gate-transformer", manufacturer: makerOf("HGT-"), mpn: "HGT-1010", description: "1:1 gate-drive transformer, reinforced (invented demo part)",
+    kind: "gate-transformer", manufacturer: makerOf("GRW-"), mpn: "GRW-T10", description: "1:1 gate-drive transformer, reinforced (invented demo part)",
     unitCost: "1.2", params: { turnsRatio: 1, magnetizingInductance: "450 µH", leakageInductance: "0.6 µH", voltSecond: "60 V·µs", isolationVoltage: "3000 V", primaryResistance: "0.2 Ω", secondaryResistance: "0.2 Ω" },
     tolerance: {},
   },

@@ -71,8 +71,8 @@ function splitNetworkOf(d: Design): GateNetwork {
   const m = q1.mosfet;
   return {
     vHigh: q1.drive.supply ?? d.controller.vcc, vLow: q1.drive.vNeg, rSource: q1.drive.sourceResistance, rSink: q1.drive.sinkResistance,
-    rExtOn: q1.gate.rOn, rExtOff: q1.gate.rOff ?? q1.gate.rOn, rgInt: m.rgInt,
-    gate: curveLoad({ qgs: m.qgs, qgd: m.qgd, qg: m.qg, vTest: m.vTest, vth: m.vth, vpl: m.vpl, ciss: m.ciss }),
+    rExtOn: q1.gate.rTurnOn, rExtOff: q1.gate.rTurnOff ?? q1.gate.rTurnOn, rgInt: m.rgInt,
+    gate: curveLoad({ qgs: m.qgs, qgd: m.qgd, qg: m.qg, qgVgs: m.qgVgs, vth: m.vth, vpl: m.vpl, ciss: m.ciss }),
   };
 }
 

@@ -41,7 +41,7 @@ test("designer: project, option from a template, edit, save, duplicate, edit the
   optionUrl = new URL(page.url()).pathname;
 
   await page.locator('[data-block="positions.0.gate"]').click();
-  const rOn = page.locator("#doc-positions-0-gate-rOn");
+  const rOn = page.locator("#doc-positions-0-gate-rTurnOn");
   await rOn.fill("6.8 nC");
   await rOn.blur();
   await expect(page.getByText(/expected a resistance.*not applied/)).toBeVisible();
@@ -58,7 +58,7 @@ test("designer: project, option from a template, edit, save, duplicate, edit the
   await page.waitForURL((u) => u.pathname !== optionUrl && /\/options\/opt_/.test(u.pathname));
   await expect(page.getByRole("heading", { level: 1 })).toContainText("(copy)");
   await page.locator('[data-block="positions.0.gate"]').click();
-  await expect(page.locator("#doc-positions-0-gate-rOn")).toHaveValue("6.8 Ω");
+  await expect(page.locator("#doc-positions-0-gate-rTurnOn")).toHaveValue("6.8 Ω");
   await page.locator('[data-block="positions.0.mosfet"]').click();
   const qg = page.locator("#doc-positions-0-mosfet-qg");
   await qg.fill("47 nC");
@@ -76,8 +76,8 @@ test("viewer: no edit controls, and a direct POST is refused with 403", async ({
   await expect(page.getByRole("button", { name: "Duplicate option" })).toHaveCount(0);
   await expect(page.getByRole("button", { name: "Choose from library" })).toHaveCount(0);
   await page.locator('[data-block="positions.0.gate"]').click();
-  await expect(page.locator("#doc-positions-0-gate-rOn")).toHaveAttribute("readonly", "");
-  await expect(page.locator("#doc-positions-0-gate-rOn")).toHaveValue("6.8 Ω");
+  await expect(page.locator("#doc-positions-0-gate-rTurnOn")).toHaveAttribute("readonly", "");
+  await expect(page.locator("#doc-positions-0-gate-rTurnOn")).toHaveValue("6.8 Ω");
 
   const optionId = optionUrl.split("/").pop()!;
   const origin = new URL(page.url()).origin;

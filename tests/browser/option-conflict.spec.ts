@@ -39,8 +39,8 @@ test("a conflicting save keeps the edits and re-applies them onto the latest rev
   await b.goto(url);
 
   await a.locator('[data-block="positions.0.gate"]').click();
-  await a.locator("#doc-positions-0-gate-rOn").fill("6.8 Ω");
-  await a.locator("#doc-positions-0-gate-rOn").blur();
+  await a.locator("#doc-positions-0-gate-rTurnOn").fill("6.8 Ω");
+  await a.locator("#doc-positions-0-gate-rTurnOn").blur();
   await a.getByRole("button", { name: "Save revision 2" }).click();
   await expect(a.getByText("Saved as revision 2.")).toBeVisible();
 
@@ -58,7 +58,7 @@ test("a conflicting save keeps the edits and re-applies them onto the latest rev
   await expect(b.getByText("Saved as revision 3.")).toBeVisible();
 
   const latest = (await (await b.request.get(`/api/v1/options/${option.id}/revisions/3`)).json()).revision;
-  expect(latest.document.positions[0].gate.rOn).toBe("6.8 Ω");
+  expect(latest.document.positions[0].gate.rTurnOn).toBe("6.8 Ω");
   expect(latest.document.positions[0].mosfet.partNumber).toBe("TQ-CONFLICT1");
   expect(latest.partRefs["positions.0.mosfet"]).toBe(part.id);
 });

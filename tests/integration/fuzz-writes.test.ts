@@ -98,7 +98,7 @@ function nonFinitePath(v: unknown, path = "$"): string | null {
   return null;
 }
 
-/** The message names the field by its last path segment (e.g. "vTest"), as a rule between two fields does. */
+/** The message names the field by its last path segment (e.g. "qgVgs"), as a rule between two fields does. */
 const mentions = (message: string, path: string) => {
   const last = path.split(".").pop() ?? "";
   return last.length >= 3 && !/^\d+$/.test(last) && message.includes(last);

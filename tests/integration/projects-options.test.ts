@@ -118,46 +118,46 @@ describe("design options and revisions", () => {
 
   it("numbers revisions 1, 2, 3 and keeps unit strings as typed", async () => {
     const doc2 = templateInput();
-    doc2.positions[0].gate.rOn = "6.8 Ω";
+    doc2.positions[0].gate.rTurnOn = "6.8 Ω";
     expect((await save(1, doc2, "6.8 Ω gate")).status).toBe(201);
     const doc3 = structuredClone(doc2);
-    doc3.positions[0].gate.rOn = "4.7 Ω";
+    doc3.positions[0].gate.rTurnOn = "4.7 Ω";
     const r3 = await save(2, doc3);
     expect(r3.status).toBe(201);
     expect(r3.json<{ revision: { revision: number } }>().revision.revision).toBe(3);
     const list = (await viewer.get(`/api/v1/options/${optionId}/revisions`)).json<{ items: { revision: number; note: string }[] }>();
     expect(list.items.map((i) => i.revision)).toEqual([3, 2, 1]);
     const rev2 = (await viewer.get(`/api/v1/options/${optionId}/revisions/2`)).json<{ revision: { document: Record<string, any>; note: string } }>().revision;
-    expect(rev2.document.positions[0].gate.rOn).toBe("6.8 Ω");
+    expect(rev2.document.positions[0].gate.rTurnOn).toBe("6.8 Ω");
     expect(rev2.note).toBe("6.8 Ω gate");
     expect((await viewer.get(`/api/v1/options/${optionId}/revisions/9`)).status).toBe(404);
   });
 
   it("accepts exactly one of two concurrent saves on the same base revision", async () => {
     const a = templateInput();
-    a.positions[0].gate.rOn = "3.3 Ω";
+    a.positions[0].gate.rTurnOn = "3.3 Ω";
     const b = templateInput();
-    b.positions[0].gate.rOn = "10 Ω";
+    b.positions[0].gate.rTurnOn = "10 Ω";
     const results = await Promise.all([save(3, a), save(3, b)]);
     expect(results.map((r) => r.status).sort()).toEqual([201, 409]);
     expect(results.find((r) => r.status === 409)!.json<{ error: { code: string } }>().error.code).toBe("conflict");
     const latest = (await viewer.get(`/api/v1/options/${optionId}`)).json<{ option: { latestRevision: number }; revision: { document: Record<string, any> } }>();
     expect(latest.option.latestRevision).toBe(4);
     const winner = results[0].status === 201 ? "3.3 Ω" : "10 Ω";
-    expect(latest.revision.document.positions[0].gate.rOn).toBe(winner);
+    expect(latest.revision.document.positions[0].gate.rTurnOn).toBe(winner);
     expect((await save(1, a)).status).toBe(409); // a stale base is refused too
   });
 
   it("validates the document with the model: a bad unit is a 400 naming the path", async () => {
     const bad = templateInput();
-    bad.positions[0].gate.rOn = "6.8 nC";
+    bad.positions[0].gate.rTurnOn = "6.8 nC";
     const r = await save(4, bad);
     expect(r.status).toBe(400);
-    expect(issuesOf(r).map((i) => i.path)).toContain("document.positions.0.gate.rOn");
+    expect(issuesOf(r).map((i) => i.path)).toContain("document.positions.0.gate.rTurnOn");
     const refs = await designer.post(`/api/v1/options/${optionId}/revisions`, { baseRevision: 4, document: templateInput(), partRefs: { "positions.0.mosfet": "prt_nope" } });
     expect(issuesOf(refs).map((i) => i.path)).toEqual(["partRefs.positions.0.mosfet"]);
     const created = await designer.post(`/api/v1/projects/${projectId}/options`, { name: "Bad", document: bad });
-    expect(issuesOf(created).map((i) => i.path)).toContain("document.positions.0.gate.rOn");
+    expect(issuesOf(created).map((i) => i.path)).toContain("document.positions.0.gate.rTurnOn");
     expect((await viewer.get(`/api/v1/options/${optionId}`)).json<{ option: { latestRevision: number } }>().option.latestRevision).toBe(4);
   });
 

@@ -32,7 +32,7 @@ describe("seedDemoProjects", () => {
       expect(parts).toHaveLength(new Set(ids).size);
     }
     const refs = revisions.map((r) => r.part_refs as Record<string, string>);
-    const controller = await k("part").where({ workspace_id: workspaceId, mpn: "HSC-3842X" }).first("id");
+    const controller = await k("part").where({ workspace_id: workspaceId, mpn: "HRG-PC72" }).first("id");
     expect(refs.every((r) => r.controller === controller.id)).toBe(true);
   });
 });

@@ -74,11 +74,11 @@ describe("submit, reject, revise, approve, choose", () => {
 
   it("the designer revises (revision 2, not frozen), submits it, and the reviewer approves", async () => {
     const doc = templateInput();
-    doc.positions[0].gate.rOn = "3.3 Ω";
-    const saved = await c.designer.post(`/api/v1/options/${optionId}/revisions`, { baseRevision: 1, document: doc, partRefs: {}, note: "lower rOn after review" });
+    doc.positions[0].gate.rTurnOn = "3.3 Ω";
+    const saved = await c.designer.post(`/api/v1/options/${optionId}/revisions`, { baseRevision: 1, document: doc, partRefs: {}, note: "lower rTurnOn after review" });
     expect(saved.status, saved.text).toBe(201);
     expect(saved.json<{ revision: { revision: number } }>().revision.revision).toBe(2);
-    const note = await c.designer.request("PATCH", `/api/v1/options/${optionId}/revisions/2`, { json: { note: "lower Q1 rOn after review" } });
+    const note = await c.designer.request("PATCH", `/api/v1/options/${optionId}/revisions/2`, { json: { note: "lower Q1 rTurnOn after review" } });
     expect(note.status, note.text).toBe(200);
     let after = await lastMailId();
     expect((await c.designer.post(`/api/v1/options/${optionId}/review`, {})).status).toBe(201);

@@ -35,7 +35,7 @@ async function datasheet(family: Family, polarity: "npn" | "pnp") {
 function input(kind: "bjt-small" | "direct"): DesignInput {
   const i = structuredClone(demoOptions.find((o) => o.key === kind)!.input);
   i.controller.pin = { sourceResistance: "6 Ω", sinkResistance: "3 Ω" };
-  i.positions[0].gate = { rOn: "2.2 Ω" };
+  i.positions[0].gate = { rTurnOn: "2.2 Ω" };
   return i;
 }
 
@@ -59,7 +59,7 @@ const design = designOf(input("bjt-small"));
 const m1 = design.positions[0].mosfet;
 const NET: Omit<FollowerNetwork, "npn" | "pnp" | "rBase"> = {
   vcc: design.controller.vcc, vNeg: 0, rPinSource: 6, rPinSink: 3, pinEdge: 3e-9, rGate: 2.2, rgInt: m1.rgInt,
-  gate: curveLoad({ qgs: m1.qgs, qgd: m1.qgd, qg: m1.qg, vTest: m1.vTest, vth: m1.vth, vpl: m1.vpl, ciss: m1.ciss }),
+  gate: curveLoad({ qgs: m1.qgs, qgd: m1.qgd, qg: m1.qg, qgVgs: m1.qgVgs, vth: m1.vth, vpl: m1.vpl, ciss: m1.ciss }),
   halfPeriod: 1.5e-6,
 };
 

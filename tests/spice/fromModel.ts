@@ -15,7 +15,7 @@ export function designOf(input: DesignInput): Design {
  * finite dQ/dV); every breakpoint has the model's charge.
  */
 export function curveLoad(c: GateChargeCurve, vMin = -25, vMax = 30): GateLoad {
-  const vs = [vMin, 0, c.vpl, c.vpl + 0.02, c.vTest, vMax];
+  const vs = [vMin, 0, c.vpl, c.vpl + 0.02, c.qgVgs, vMax];
   return { kind: "curve", points: vs.map((v) => [v, chargeAt(c, v)] as [number, number]) };
 }
 

@@ -266,11 +266,11 @@ const FREEWHEEL = ".model dfw D(Is=1e-12 Rs=5m Cjo=50p N=1 TT=0)\n.options absto
  * inductive load (current source + freewheel diode to the bus). The gate
  * charge is integrated from the resistor current. Reads the plateau start
  * (Vds 5 % below the bus), the plateau end (Vgs 0.2 V above the plateau
- * level), the charge at Vgs = vTest, and the slope dQ/dV between 1 and 1.5 V.
+ * level), the charge at Vgs = qgVgs, and the slope dQ/dV between 1 and 1.5 V.
  * Drain current is sensed by a 1 mΩ resistor (a 0 V source in series with
  * the two diodes upsets ngspice's first time steps here).
  */
-export function gateChargeNetlist(m: VdmosCard, load: ClampedLoad, ig: number, vTest: number): string {
+export function gateChargeNetlist(m: VdmosCard, load: ClampedLoad, ig: number, qgVgs: number): string {
   const t0 = 10e-9;
   const vq = 1000;
   const tEnd = t0 + 150e-9 / ig;
@@ -288,7 +288,7 @@ meas tran v_pl find v(g) at=t_pl
 let vend = v_pl + 0.2
 meas tran t_pl_end when v(g)=vend rise=1
 meas tran q_pl_end find q at=t_pl_end
-meas tran t_test when v(g)=${sp(vTest)} rise=1
+meas tran t_test when v(g)=${sp(qgVgs)} rise=1
 meas tran q_test find q at=t_test
 meas tran t_a when v(g)=1 rise=1
 meas tran q_a find q at=t_a

@@ -1,6 +1,6 @@
 // (a) Where the gate-drive energy is burnt: ngspice vs the model's resistive split.
-// Circuit: Q1 of demo option 3 (driver IC HSD-4410 2 Ω / 1 Ω, split outputs rOn 2.2 Ω /
-// rOff 1 Ω, Rg(int) 1 Ω, gate charge of QN-150F12), built from the model's inputs.
+// Circuit: Q1 of demo option 3 (driver IC HRG-LS9T 2 Ω / 1 Ω, split outputs rTurnOn 2.2 Ω /
+// rTurnOff 1 Ω, Rg(int) 1 Ω, gate charge of QN-150F12), built from the model's inputs.
 import { describe, expect, it } from "vitest";
 import { demoOptions, evaluateDesign, type Design } from "@/models";
 import { runNgspice, valueOf } from "./ngspice";
@@ -13,7 +13,7 @@ type Variant = { vNeg: number; linearC?: number; keepLimits?: boolean };
 function variant({ vNeg, linearC, keepLimits }: Variant): Design {
   const input = structuredClone(demoOptions.find((o) => o.key === "driver-ic")!.input);
   const q1 = input.positions[0];
-  q1.gate = { rOn: "2.2 Ω", rOff: "1 Ω" };
+  q1.gate = { rTurnOn: "2.2 Ω", rTurnOff: "1 Ω" };
   if (q1.drive.kind !== "driver-ic") throw new Error("demo option 3 changed");
   q1.drive.vNeg = vNeg;
   // Resistive split first: no peak-current limit (the limited case has its own test below).
@@ -22,8 +22,8 @@ function variant({ vNeg, linearC, keepLimits }: Variant): Design {
     delete q1.drive.sinkPeakCurrent;
   }
   if (linearC !== undefined) {
-    // Q = C·V everywhere: Qgs = C·Vpl, no plateau, Qg = C·vTest, Ciss = C.
-    q1.mosfet = { ...q1.mosfet, qgs: linearC * 4.8, qgd: 0, qg: linearC * 10, vTest: 10, vpl: 4.8, ciss: linearC };
+    // Q = C·V everywhere: Qgs = C·Vpl, no plateau, Qg = C·qgVgs, Ciss = C.
+    q1.mosfet = { ...q1.mosfet, qgs: linearC * 4.8, qgd: 0, qg: linearC * 10, qgVgs: 10, vpl: 4.8, ciss: linearC };
   }
   return designOf(input);
 }
@@ -34,10 +34,10 @@ function networkOf(d: Design, linear: boolean): GateNetwork {
   const m = q1.mosfet;
   const gate: GateLoad = linear
     ? { kind: "linear", c: m.ciss as number }
-    : curveLoad({ qgs: m.qgs, qgd: m.qgd, qg: m.qg, vTest: m.vTest, vth: m.vth, vpl: m.vpl, ciss: m.ciss });
+    : curveLoad({ qgs: m.qgs, qgd: m.qgd, qg: m.qg, qgVgs: m.qgVgs, vth: m.vth, vpl: m.vpl, ciss: m.ciss });
   return {
     vHigh: q1.drive.supply ?? d.controller.vcc, vLow: q1.drive.vNeg, rSource: q1.drive.sourceResistance, rSink: q1.drive.sinkResistance,
-    rExtOn: q1.gate.rOn, rExtOff: q1.gate.rOff as number, rgInt: m.rgInt, gate,
+    rExtOn: q1.gate.rTurnOn, rExtOff: q1.gate.rTurnOff as number, rgInt: m.rgInt, gate,
     sourceLimit: q1.drive.sourcePeakCurrent, sinkLimit: q1.drive.sinkPeakCurrent,
   };
 }

@@ -38,22 +38,23 @@ export const EDGE_FSW = 100e3;
 export function edgeCheckDesign(d: Sheet, o: { name: string; vLow: number; rGate: number; vds: number; opposingQrr?: number; eoss?: number }): DesignInput {
   const q = (x: number) => `${x} C`;
   return {
+    schemaVersion: 2,
     name: o.name,
     corners: [{ id: "c", vin: 48, ambient: 25, fsw: EDGE_FSW }],
     controller: { vcc: 12, iq: 0, pin: { sourceResistance: 1, sinkResistance: 1 }, rthJA: 50 },
     positions: [{
       id: "Q1", role: "primary",
       mosfet: {
-        qgs: q(d.qgs), qgd: q(d.qgd), qg: q(d.qg), vTest: 10, vth: d.vth, vpl: d.vpl, ciss: d.ciss, rgInt: 1.2,
+        qgs: q(d.qgs), qgd: q(d.qgd), qg: q(d.qg), qgVgs: 10, vth: d.vth, vpl: d.vpl, ciss: d.ciss, rgInt: 1.2,
         rds25: 0.006, rthJA: 40,
-        ...(o.eoss !== undefined ? { outputCapacitance: { vTest: o.vds, eoss: `${o.eoss} J` } } : {}),
+        ...(o.eoss !== undefined ? { outputCapacitance: { vds: o.vds, eoss: `${o.eoss} J` } } : {}),
       },
       drive: { kind: "driver-ic", supply: V_HIGH, vNeg: o.vLow, sourceResistance: 1e-6, sinkResistance: 1e-6, rthJA: 100 },
-      gate: { rOn: o.rGate },
+      gate: { rTurnOn: o.rGate },
       conduction: {
         switching: "hard",
         ...(o.opposingQrr !== undefined ? { opposingQrr: q(o.opposingQrr) } : {}),
-        points: [{ vin: 48, duty: 0.5, vdsOn: o.vds, idOn: LOAD.iLoad, vdsOff: o.vds, idOff: LOAD.iLoad, iRms: 7, iAvg: 5 }],
+        points: [{ vin: 48, duty: 0.5, turnOnVds: o.vds, turnOnId: LOAD.iLoad, turnOffVds: o.vds, turnOffId: LOAD.iLoad, iRms: 7, iAvg: 5 }],
       },
     }],
   };

@@ -9,14 +9,15 @@ type PositionInput = DesignInput["positions"][number];
 function build(drive: PositionInput["drive"], over: { vin?: number; duty?: number; gate?: PositionInput["gate"] } = {}): Design {
   const vin = over.vin ?? 48;
   const input: DesignInput = {
+    schemaVersion: 2,
     name: "drive test",
     corners: [{ id: "a", vin, ambient: 25, fsw: 100e3 }],
     controller: { vcc: 12, iq: 0, pin: { sourceResistance: 10, sinkResistance: 5 }, rthJA: 100 },
     positions: [{
       id: "Q1", role: "synchronous-rectifier",
       mosfet: { qgs: 10e-9, qgd: 8e-9, qg: 40e-9, vth: 2.5, vpl: 4, rgInt: 1, rds25: 0.005, rthJA: 40, vgsMax: 20 },
-      drive, gate: over.gate ?? { rOn: 2 },
-      conduction: { switching: "zvs", points: [{ vin, vdsOn: 0, idOn: 0, vdsOff: 0, idOff: 0, iRms: 0, iAvg: 0, duty: over.duty ?? 0.4 }] },
+      drive, gate: over.gate ?? { rTurnOn: 2 },
+      conduction: { switching: "zvs", points: [{ vin, turnOnVds: 0, turnOnId: 0, turnOffVds: 0, turnOffId: 0, iRms: 0, iAvg: 0, duty: over.duty ?? 0.4 }] },
     }],
   };
   const r = parseDesign(input);
@@ -24,7 +25,7 @@ function build(drive: PositionInput["drive"], over: { vin?: number; duty?: numbe
   return r.design;
 }
 
-const curve = { qgs: 10e-9, qgd: 8e-9, qg: 40e-9, vTest: 10, vth: 2.5, vpl: 4 };
+const curve = { qgs: 10e-9, qgd: 8e-9, qg: 40e-9, qgVgs: 10, vth: 2.5, vpl: 4 };
 const pts = [{ ic: 0.01, hfe: 160 }, { ic: 0.15, hfe: 130 }, { ic: 1, hfe: 15 }, { ic: 2, hfe: 5 }];
 
 describe("hFE(Ic) interpolation", () => {

@@ -4,10 +4,10 @@ import { gateDrivePower, splitByResistance } from "@/models/gatePower";
 import { parseDesign, type DesignInput } from "@/models/schema";
 import { evaluateDesign } from "@/models/evaluate";
 
-const curve = { qgs: 17e-9, qgd: 13e-9, qg: 58e-9, vTest: 10, vth: 3, vpl: 4.9 };
+const curve = { qgs: 17e-9, qgd: 13e-9, qg: 58e-9, qgVgs: 10, vth: 3, vpl: 4.9 };
 
 describe("gate charge curve (DOMAIN item 1)", () => {
-  it("is linear to Vpl, flat by Qgd on the plateau, linear above to Qg(vTest)", () => {
+  it("is linear to Vpl, flat by Qgd on the plateau, linear above to Qg(qgVgs)", () => {
     // Worked by hand: above the plateau the slope is (58 − 30) nC / (10 − 4.9) V.
     expect(chargeAt(curve, 2.45)).toBeCloseTo(8.5e-9, 15);
     expect(chargeAt(curve, 4.9)).toBeCloseTo(17e-9, 15);
@@ -59,15 +59,16 @@ describe("gate-drive power and its split (DOMAIN items 2–3)", () => {
   it("the full model books exactly C·V²·fsw for a linear gate, split by resistance per edge", () => {
     const C = 4e-9;
     const input: DesignInput = {
+      schemaVersion: 2,
       name: "linear gate",
       corners: [{ id: "a", vin: 48, ambient: 25, fsw: 200e3 }],
       controller: { vcc: 12, iq: 0, pin: { sourceResistance: 6, sinkResistance: 3 }, rthJA: 50 },
       positions: [{
         id: "Q1", role: "primary",
-        // Linear Q(V) = C·V: Qgs = C·Vpl, no plateau, Qg = C·vTest, Ciss = C.
-        mosfet: { qgs: C * 4, qgd: 0, qg: C * 10, vTest: 10, vth: 3, vpl: 4, ciss: C, rgInt: 1, rds25: 0.01, rthJA: 30 },
-        drive: { kind: "direct" }, gate: { rOn: 2, rOff: 0.5 },
-        conduction: { switching: "zvs", points: [{ vin: 48, vdsOn: 0, idOn: 0, vdsOff: 0, idOff: 0, iRms: 0, iAvg: 0, duty: 0.5 }] },
+        // Linear Q(V) = C·V: Qgs = C·Vpl, no plateau, Qg = C·qgVgs, Ciss = C.
+        mosfet: { qgs: C * 4, qgd: 0, qg: C * 10, qgVgs: 10, vth: 3, vpl: 4, ciss: C, rgInt: 1, rds25: 0.01, rthJA: 30 },
+        drive: { kind: "direct" }, gate: { rTurnOn: 2, rTurnOff: 0.5 },
+        conduction: { switching: "zvs", points: [{ vin: 48, turnOnVds: 0, turnOnId: 0, turnOffVds: 0, turnOffId: 0, iRms: 0, iAvg: 0, duty: 0.5 }] },
       }],
     };
     const r = parseDesign(input);

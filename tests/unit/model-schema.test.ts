@@ -5,14 +5,15 @@ import { demoOptions } from "@/models/demo";
 /** A one-switch design written with unit strings, as a user would. */
 function oneSwitch(): DesignInput {
   return {
+    schemaVersion: 2,
     name: "schema test",
     corners: [{ id: "nom", vin: "48 V", ambient: "85 °C", fsw: "250 kHz" }],
     controller: { vcc: "12 V", iq: "5 mA", pin: { sourceResistance: "5 Ω", sinkResistance: "2 Ω" }, rthJA: "90 °C/W" },
     positions: [{
       id: "Q1", role: "primary",
       mosfet: { qgs: "17 nC", qgd: "13 nC", qg: "58 nC", vth: "3 V", vpl: "4.9 V", rds25: "10 mΩ", rthJA: "30 K/W" },
-      drive: { kind: "direct" }, gate: { rOn: "2.2 ohm" },
-      conduction: { points: [{ vin: "48 V", vdsOn: "48 V", idOn: "10 A", vdsOff: "80 V", idOff: "12 A", iRms: "8 A", iAvg: "4 A", duty: 0.4 }] },
+      drive: { kind: "direct" }, gate: { rTurnOn: "2.2 ohm" },
+      conduction: { points: [{ vin: "48 V", turnOnVds: "48 V", turnOnId: "10 A", turnOffVds: "80 V", turnOffId: "12 A", iRms: "8 A", iAvg: "4 A", duty: 0.4 }] },
     }],
   };
 }
@@ -24,7 +25,7 @@ describe("parseDesign", () => {
     if (!r.ok) return;
     const m = r.design.positions[0].mosfet;
     expect(m.qg / 58e-9).toBeCloseTo(1, 12);
-    expect(m.vTest).toBe(10); // Qg test voltage default (policy.ts)
+    expect(m.qgVgs).toBe(10); // Qg test gate voltage default (policy.ts)
     expect(m.rgInt).toBe(1);
     expect(r.design.corners[0].fsw).toBe(250e3);
     expect(r.design.corners[0].ambient).toBeCloseTo(85, 12);

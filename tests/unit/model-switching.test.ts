@@ -4,20 +4,24 @@ import { channelLoss, deadTimeLoss, diodeLoss, rdsAt } from "@/models/conduction
 import { parseDesign, type Design, type DesignInput } from "@/models/schema";
 import { evaluateDesign } from "@/models/evaluate";
 
-function oneSwitch(over: Partial<DesignInput["positions"][number]["conduction"]> = {}): Design {
-  const input: DesignInput = {
+function oneSwitchInput(over: Partial<DesignInput["positions"][number]["conduction"]> = {}): DesignInput {
+  return {
+    schemaVersion: 2,
     name: "switching test",
     corners: [{ id: "a", vin: 48, ambient: 25, fsw: 100e3 }],
     controller: { vcc: 12, iq: 0, pin: { sourceResistance: 5, sinkResistance: 2 }, rthJA: 50 },
     positions: [{
       id: "Q1", role: "primary",
       mosfet: { qgs: 17e-9, qgd: 13e-9, qg: 58e-9, vth: 3, vpl: 4.9, rgInt: 1, rds25: 0.01, rdsHot: 0.017, tHot: 125, rthJA: 1,
-        outputCapacitance: { vTest: 75, eoss: 1.6e-6 }, vsd: 0.85, rDiode: 0.01 },
-      drive: { kind: "direct" }, gate: { rOn: 2 },
-      conduction: { points: [{ vin: 48, vdsOn: 48, idOn: 10, vdsOff: 80, idOff: 12, iRms: 8, iAvg: 6, duty: 0.5 }], opposingQrr: 50e-9, ...over },
+        outputCapacitance: { vds: 75, eoss: 1.6e-6 }, vsd: 0.85, rDiode: 0.01 },
+      drive: { kind: "direct" }, gate: { rTurnOn: 2 },
+      conduction: { points: [{ vin: 48, turnOnVds: 48, turnOnId: 10, turnOffVds: 80, turnOffId: 12, iRms: 8, iAvg: 6, duty: 0.5 }], opposingQrr: 50e-9, ...over },
     }],
   };
-  const r = parseDesign(input);
+}
+
+function oneSwitch(over: Partial<DesignInput["positions"][number]["conduction"]> = {}): Design {
+  const r = parseDesign(oneSwitchInput(over));
   if (!r.ok) throw new Error(JSON.stringify(r.issues));
   return r.design;
 }
@@ -54,8 +58,50 @@ describe("hard-switching edges, clamped inductive load (Erickson & Maksimović 3
   });
 
   it("Eoss from Qoss or Coss assumes Coss ∝ V^−½ (E = QV/3, E = ⅔·C·V²)", () => {
-    expect(eossAt({ vTest: 50, qoss: 30e-9 }, 50)).toBeCloseTo((30e-9 * 50) / 3, 15);
-    expect(eossAt({ vTest: 50, coss: 600e-12 }, 50)).toBeCloseTo((2 / 3) * 600e-12 * 2500, 15);
+    expect(eossAt({ vds: 50, qoss: 30e-9 }, 50)).toBeCloseTo((30e-9 * 50) / 3, 15);
+    expect(eossAt({ vds: 50, coss: 600e-12 }, 50)).toBeCloseTo((2 / 3) * 600e-12 * 2500, 15);
+  });
+});
+
+describe("output capacitance given as several datasheet figures", () => {
+  const withOc = (oc: Record<string, unknown>) => {
+    const input = JSON.parse(JSON.stringify(oneSwitchInput()));
+    input.positions[0].mosfet.outputCapacitance = oc;
+    return parseDesign(input);
+  };
+  const evaluated = (oc: Record<string, unknown>) => {
+    const r = withOc(oc);
+    if (!r.ok) throw new Error(JSON.stringify(r.issues));
+    return evaluateDesign(r.design).corners[0];
+  };
+  const cossLoss = (c: ReturnType<typeof evaluated>) => c.parts.find((p) => p.id === "Q1")!.losses.coss;
+
+  it("uses Eoss when all three are given, and says so", () => {
+    const all = evaluated({ vds: "75 V", eoss: "1.6 µJ", qoss: "60 nC", coss: "400 pF" });
+    expect(cossLoss(all)).toBeCloseTo(cossLoss(evaluated({ vds: "75 V", eoss: "1.6 µJ" })), 15);
+    expect(all.positions[0].outputCapacitance).toEqual({ figure: "eoss", reason: expect.stringMatching(/Qoss and Coss also given/) });
+  });
+
+  it("falls back to Qoss before Coss, and to Coss alone", () => {
+    const qc = evaluated({ vds: "50 V", qoss: "30 nC", coss: "600 pF" });
+    expect(cossLoss(qc)).toBeCloseTo(((30e-9 * 50) / 3) * Math.pow(48 / 50, 1.5) * 100e3, 9);
+    expect(qc.positions[0].outputCapacitance?.figure).toBe("qoss");
+    expect(qc.positions[0].outputCapacitance?.reason).toMatch(/no Eoss given/);
+    expect(evaluated({ vds: "50 V", coss: "600 pF" }).positions[0].outputCapacitance?.figure).toBe("coss");
+  });
+
+  it("refuses a test voltage with no figure, in plain words", () => {
+    const r = withOc({ vds: "75 V" });
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.issues).toContainEqual({ path: "positions.0.mosfet.outputCapacitance.eoss", message: "give at least one of Eoss, Qoss or Coss at the test voltage" });
+  });
+
+  it("reports no figure for a MOSFET without an output-capacitance block", () => {
+    const input = JSON.parse(JSON.stringify(oneSwitchInput()));
+    delete input.positions[0].mosfet.outputCapacitance;
+    const r = parseDesign(input);
+    if (!r.ok) throw new Error(JSON.stringify(r.issues));
+    expect(evaluateDesign(r.design).corners[0].positions[0].outputCapacitance).toBeNull();
   });
 });
 

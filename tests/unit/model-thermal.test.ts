@@ -5,14 +5,15 @@ import { evaluateDesign } from "@/models/evaluate";
 
 function conductionOnly({ iRms, rthJA, ambient = 40 }: { iRms: number; rthJA: number; ambient?: number }): Design {
   const input: DesignInput = {
+    schemaVersion: 2,
     name: "thermal test",
     corners: [{ id: "a", vin: 48, ambient, fsw: 1000 }],
     controller: { vcc: 12, iq: 0.005, pin: { sourceResistance: 5, sinkResistance: 2 }, rthJA: 80 },
     positions: [{
       id: "Q1", role: "other",
       mosfet: { qgs: 10e-9, qgd: 5e-9, qg: 30e-9, vth: 3, vpl: 4.5, rds25: 0.01, rdsHot: 0.018, tHot: 125, rthJA },
-      drive: { kind: "direct" }, gate: { rOn: 0 },
-      conduction: { switching: "zvs", points: [{ vin: 48, vdsOn: 0, idOn: 0, vdsOff: 0, idOff: 0, iRms, iAvg: 0, duty: 0.5 }] },
+      drive: { kind: "direct" }, gate: { rTurnOn: 0 },
+      conduction: { switching: "zvs", points: [{ vin: 48, turnOnVds: 0, turnOnId: 0, turnOffVds: 0, turnOffId: 0, iRms, iAvg: 0, duty: 0.5 }] },
     }],
   };
   const r = parseDesign(input);

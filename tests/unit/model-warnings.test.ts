@@ -1,14 +1,15 @@
 import { describe, expect, it } from "vitest";
 import { parseDesign, type Design, type DesignInput } from "@/models/schema";
 import { evaluateDesign } from "@/models/evaluate";
-import { npnQTN40S, pnpQTP40S } from "@/models/demoParts";
+import { npnQTN6SL, pnpQTP6SL } from "@/models/demoParts";
 
 type PositionInput = DesignInput["positions"][number];
 
 /** Purpose-built inputs: one position, corners at 36 and 75 V. */
 function build(drive: PositionInput["drive"], over: { pin?: Record<string, string>; duty?: number; rthJA?: string } = {}): Design {
-  const point = (vin: number) => ({ vin, vdsOn: vin, idOn: 5, vdsOff: 1.5 * vin, idOff: 6, iRms: 4, iAvg: 2, duty: over.duty ?? 0.4 });
+  const point = (vin: number) => ({ vin, turnOnVds: vin, turnOnId: 5, turnOffVds: 1.5 * vin, turnOffId: 6, iRms: 4, iAvg: 2, duty: over.duty ?? 0.4 });
   const input: DesignInput = {
+    schemaVersion: 2,
     name: "warning test",
     corners: [
       { id: "vmin", vin: "36 V", ambient: "60 °C", fsw: "200 kHz" },
@@ -18,7 +19,7 @@ function build(drive: PositionInput["drive"], over: { pin?: Record<string, strin
     positions: [{
       id: "SR1", role: "synchronous-rectifier",
       mosfet: { qgs: "15 nC", qgd: "9 nC", qg: "52 nC", vth: "2.6 V", vpl: "4.3 V", rds25: "3 mΩ", vgsMax: "20 V", rthJA: over.rthJA ?? "20 K/W" },
-      drive, gate: { rOn: "1 Ω" },
+      drive, gate: { rTurnOn: "1 Ω" },
       conduction: { switching: "zvs", points: [point(36), point(75)] },
     }],
   };
@@ -43,7 +44,7 @@ describe("warnings on purpose-built inputs", () => {
 
   it("gate starved by hFE collapse: a weak pin behind a small-signal follower", () => {
     const d = build(
-      { kind: "bjt-follower", npn: { ...npnQTN40S, rBase: "10 Ω" }, pnp: { ...pnpQTP40S, rBase: "10 Ω" } },
+      { kind: "bjt-follower", npn: { ...npnQTN6SL, rBase: "10 Ω" }, pnp: { ...pnpQTP6SL, rBase: "10 Ω" } },
       { pin: { sourceCurrentLimit: "0.1 A", sinkCurrentLimit: "0.1 A" } },
     );
     const e = evaluateDesign(d);
@@ -70,7 +71,7 @@ describe("warnings on purpose-built inputs", () => {
   });
 
   it("transistor over its peak current rating", () => {
-    const d = build({ kind: "bjt-follower", npn: npnQTN40S, pnp: pnpQTP40S });
+    const d = build({ kind: "bjt-follower", npn: npnQTN6SL, pnp: pnpQTP6SL });
     expect(codes(d)).toContain("transistor-over-rating@vmin:SR1.npn");
   });
 

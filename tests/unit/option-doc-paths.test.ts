@@ -5,13 +5,13 @@ import { changedPaths, getAt, reapplyEdits, reapplyFlat, setAt } from "@/app/(wo
 import { applyPartBlock, partSlots } from "@/app/(workspace)/projects/[projectId]/options/partSlots";
 import { demoOptions } from "@/models/demo";
 
-const base = { name: "x", positions: [{ id: "Q1", gate: { rOn: "2 Ω" }, mosfet: { qg: "40 nC", count: 2 } }], corners: [{ id: "a", vin: "36 V" }] };
+const base = { name: "x", positions: [{ id: "Q1", gate: { rTurnOn: "2 Ω" }, mosfet: { qg: "40 nC", count: 2 } }], corners: [{ id: "a", vin: "36 V" }] };
 
 describe("setAt / getAt", () => {
   it("writes by dotted path without touching the original", () => {
-    const next = setAt(base, "positions.0.gate.rOn", "6.8 Ω");
-    expect(getAt(next, "positions.0.gate.rOn")).toBe("6.8 Ω");
-    expect(base.positions[0].gate.rOn).toBe("2 Ω");
+    const next = setAt(base, "positions.0.gate.rTurnOn", "6.8 Ω");
+    expect(getAt(next, "positions.0.gate.rTurnOn")).toBe("6.8 Ω");
+    expect(base.positions[0].gate.rTurnOn).toBe("2 Ω");
     expect(getAt(next, "positions.0.mosfet")).toBe(getAt(base, "positions.0.mosfet")); // untouched branches are shared
   });
 
@@ -23,21 +23,21 @@ describe("setAt / getAt", () => {
 
 describe("reapplyEdits (save conflict)", () => {
   it("lays my changes onto theirs and keeps their other changes", () => {
-    const mine = setAt(base, "positions.0.gate.rOn", "6.8 Ω");
+    const mine = setAt(base, "positions.0.gate.rTurnOn", "6.8 Ω");
     const theirs = setAt(base, "positions.0.mosfet.qg", "47 nC");
     const r = reapplyEdits({ base, mine, theirs });
-    expect(getAt(r.document, "positions.0.gate.rOn")).toBe("6.8 Ω");
+    expect(getAt(r.document, "positions.0.gate.rTurnOn")).toBe("6.8 Ω");
     expect(getAt(r.document, "positions.0.mosfet.qg")).toBe("47 nC");
     expect(r.overlaps).toEqual([]);
     expect(r.applied).toBe(1);
   });
 
   it("reports a field both sides changed differently; mine wins there", () => {
-    const mine = setAt(base, "positions.0.gate.rOn", "6.8 Ω");
-    const theirs = setAt(base, "positions.0.gate.rOn", "10 Ω");
+    const mine = setAt(base, "positions.0.gate.rTurnOn", "6.8 Ω");
+    const theirs = setAt(base, "positions.0.gate.rTurnOn", "10 Ω");
     const r = reapplyEdits({ base, mine, theirs });
-    expect(r.overlaps).toEqual(["positions.0.gate.rOn"]);
-    expect(getAt(r.document, "positions.0.gate.rOn")).toBe("6.8 Ω");
+    expect(r.overlaps).toEqual(["positions.0.gate.rTurnOn"]);
+    expect(getAt(r.document, "positions.0.gate.rTurnOn")).toBe("6.8 Ω");
     expect(reapplyEdits({ base, mine, theirs: mine }).overlaps).toEqual([]); // the same change is no overlap
   });
 

@@ -50,6 +50,32 @@ describe("parsePartsCsv", () => {
   });
 });
 
+describe("old column names (design document version 1)", () => {
+  const OLD = `${HEAD},param.vTest,param.outputCapacitance.vTest,param.outputCapacitance.eoss`;
+  const NEW = `${HEAD},param.qgVgs,param.outputCapacitance.vds,param.outputCapacitance.eoss`;
+  const CELLS = `${GOOD},12 V,40 V,1.1 uJ`;
+
+  it("reads param.vTest and param.outputCapacitance.vTest as the new columns", () => {
+    const old = parsePartsCsv(`${OLD}\n${CELLS}\n`);
+    expect(old.issues).toEqual([]);
+    expect(old.rows[0].value.params).toMatchObject({ qgVgs: 12, outputCapacitance: { vds: 40, eoss: 1.1e-6 } });
+    expect(old.rows[0].value).toEqual(parsePartsCsv(`${NEW}\n${CELLS}\n`).rows[0].value);
+  });
+
+  it("exports the new names only", () => {
+    const header = serializePartsCsv([parsePartsCsv(`${OLD}\n${CELLS}\n`).rows[0].value]).split("\r\n")[0];
+    expect(header).toContain("param.qgVgs");
+    expect(header).toContain("param.outputCapacitance.vds");
+    expect(header).not.toMatch(/vTest/);
+  });
+
+  it("refuses a row that gives both the old and the new name, at the old column", () => {
+    const r = parsePartsCsv(`${HEAD},param.vTest,param.qgVgs\n${GOOD},12 V,10 V\n`);
+    expect(r.rows).toEqual([]);
+    expect(r.issues).toEqual([{ row: 2, column: "param.vTest", message: "vTest is the old name of qgVgs; give only one of them" }]);
+  });
+});
+
 describe("serializePartsCsv", () => {
   it("round-trips every demo part of every kind exactly", () => {
     const parts = demoPartValues();

@@ -30,10 +30,10 @@ function modified(design: Design, cornerId: string, axes: [SweepAxis, number][])
     } else {
       const g = d.positions.find((p) => p.id === a.position)!.gate;
       const edge = a.edge ?? "both";
-      if (edge === "off") g.rOff = v;
+      if (edge === "off") g.rTurnOff = v;
       else {
-        if (edge === "both" && g.rOff !== undefined) g.rOff = (g.rOff * v) / g.rOn;
-        g.rOn = v;
+        if (edge === "both" && g.rTurnOff !== undefined) g.rTurnOff = (g.rTurnOff * v) / g.rTurnOn;
+        g.rTurnOn = v;
       }
     }
   }

@@ -1,4 +1,4 @@
-import { PART_KINDS, PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS } from "@/app/_lib/partKinds";
+import { PART_KINDS, PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, allParamAliases } from "@/app/_lib/partKinds";
 import { DIMENSIONS } from "@/models/units";
 import { MAX_IMPORT_ROWS } from "@/app/_lib/partCsv";
 
@@ -26,6 +26,15 @@ export function CsvHelp() {
         <code>150 degC</code>. A bare number is refused (is &quot;47&quot; in C or nC?), except for ratios and hFE. Every row is
         checked before anything is written; one bad cell stops the whole import, and each problem is listed by row (the header
         is row 1) and column. At most {MAX_IMPORT_ROWS} rows per file. The export writes this same format.
+      </p>
+      <p>
+        Older files keep working: {Object.entries(allParamAliases()).map(([old, key], i) => (
+          <span key={old}>
+            {i > 0 ? ", " : ""}
+            <code>param.{old}</code> is read as <code>param.{key}</code>
+          </span>
+        ))}
+        . A MOSFET&apos;s output capacitance takes any of Eoss, Qoss and Coss at its test Vds; the model uses Eoss when given.
       </p>
       <div className="overflow-x-auto">
         <table className="w-full border-collapse text-xs">

@@ -1,5 +1,5 @@
 /**
- * Reading and writing a design document by dotted path ("positions.0.gate.rOn"),
+ * Reading and writing a design document by dotted path ("positions.0.gate.rTurnOn"),
  * immutably, and the three-way re-apply the editor offers after a save
  * conflict: the user's changes (base -> mine) laid onto the latest revision.
  */

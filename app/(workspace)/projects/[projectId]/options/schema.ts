@@ -3,10 +3,13 @@
  * page's forms and /api/v1 handlers share. The design document itself is
  * the model's (models/schema.ts): it is stored as the user typed it (unit
  * strings kept) and accepted only when parseDesign accepts it; its issues
- * come back under "document.<path>" so the editor can place them.
+ * come back under "document.<path>" so the editor can place them. An older
+ * version (models/schemaUpgrade.ts) is accepted and stored upgraded, so the
+ * product only ever writes the current version.
  */
 import { z } from "zod";
 import { parseDesign } from "@/models/schema";
+import { upgradeDesignDocument } from "@/models/schemaUpgrade";
 import { recordIdSchema } from "../../schema";
 
 /**
@@ -22,19 +25,22 @@ const blankToUndefined = (v: unknown) => (typeof v === "string" && v.trim() === 
 
 const pathSegments = (path: string): (string | number)[] => (path === "" ? [] : path.split(".").map((s) => (/^\d+$/.test(s) ? Number(s) : s)));
 
-/** Any JSON value that parseDesign accepts; the raw value is kept, not the parsed one. */
-export const designDocumentSchema = z.unknown().superRefine((doc, ctx) => {
-  if (doc === undefined || doc === null) {
-    ctx.addIssue({ code: "custom", message: "a design document is required" });
-    return;
-  }
-  if (JSON.stringify(doc).length > MAX_DOCUMENT_CHARS) {
-    ctx.addIssue({ code: "custom", message: `the document is larger than ${MAX_DOCUMENT_CHARS / 1024} kB` });
-    return;
-  }
-  const parsed = parseDesign(doc);
-  if (!parsed.ok) for (const i of parsed.issues) ctx.addIssue({ code: "custom", path: pathSegments(i.path), message: i.message });
-});
+/** Any JSON value that parseDesign accepts; the raw value is kept (upgraded to the current version), not the parsed one. */
+export const designDocumentSchema = z
+  .unknown()
+  .superRefine((doc, ctx) => {
+    if (doc === undefined || doc === null) {
+      ctx.addIssue({ code: "custom", message: "a design document is required" });
+      return;
+    }
+    if (JSON.stringify(doc).length > MAX_DOCUMENT_CHARS) {
+      ctx.addIssue({ code: "custom", message: `the document is larger than ${MAX_DOCUMENT_CHARS / 1024} kB` });
+      return;
+    }
+    const parsed = parseDesign(doc);
+    if (!parsed.ok) for (const i of parsed.issues) ctx.addIssue({ code: "custom", path: pathSegments(i.path), message: i.message });
+  })
+  .transform((doc) => upgradeDesignDocument(doc).document);
 
 export const partRefsSchema = z
   .record(z.string().min(1).max(200), z.string().min(1).max(80))

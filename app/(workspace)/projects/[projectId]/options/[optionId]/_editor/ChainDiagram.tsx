@@ -63,7 +63,7 @@ export function ChainDiagram({ selected, onSelect }: { selected: string; onSelec
               <Link label={selfDriven ? "Vw" : "PWM"} />
               {block(`${at}.drive`, "Drive stage", [DRIVE_KIND_LABELS[kind], ...driveParts(drive)], "stage")}
               <Link label="Ig" />
-              {block(`${at}.gate`, "Gate network", [`on ${displayQuantity(gate.rOn, "resistance")}`, `off ${gate.rOff !== undefined ? displayQuantity(gate.rOff, "resistance") : "= on"}${gate.steeringDiode ? " + diode" : ""}`], "network")}
+              {block(`${at}.gate`, "Gate network", [`on ${displayQuantity(gate.rTurnOn, "resistance")}`, `off ${gate.rTurnOff !== undefined ? displayQuantity(gate.rTurnOff, "resistance") : "= on"}${gate.steeringDiode ? " + diode" : ""}`], "network")}
               <Link label="Vgs" />
               {block(`${at}.mosfet`, `Switch ${String(p.id ?? "")}`, [String(mosfet.partNumber ?? "MOSFET") + (Number(mosfet.count ?? 1) > 1 ? ` ×${String(mosfet.count)}` : ""), `Qg ${displayQuantity(mosfet.qg, "charge")}`], "switch")}
             </div>

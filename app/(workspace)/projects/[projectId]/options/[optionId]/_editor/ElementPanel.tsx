@@ -61,7 +61,7 @@ function GateNetwork({ path }: { path: string }) {
       <FieldGrid base={path} fields={GATE_FIELDS} />
       <label className="flex items-center gap-2 text-sm text-ink">
         <input type="checkbox" checked={diode !== undefined} disabled={ed.readOnly} onChange={(e) => ed.set(`${path}.steeringDiode`, e.target.checked ? {} : undefined)} />
-        Steering diode: rOff with a diode across rOn speeds up turn-off
+        Steering diode: rTurnOff with a diode across rTurnOn speeds up turn-off
       </label>
       {diode !== undefined && <FieldGrid base={`${path}.steeringDiode`} fields={[{ key: "vf", label: "Diode Vf", type: "qty", dim: "voltage", hint: "default 0.7 V" }]} />}
     </div>

@@ -87,8 +87,8 @@ export const CLAMP_FIELDS: EditorField[] = [
 ];
 
 export const GATE_FIELDS: EditorField[] = [
-  qty("rOn", "Rg turn-on (rOn)", "resistance", true),
-  qty("rOff", "Rg turn-off (rOff)", "resistance", false, "default rOn (one resistor)"),
+  qty("rTurnOn", "Rg turn-on (rTurnOn)", "resistance", true),
+  qty("rTurnOff", "Rg turn-off (rTurnOff)", "resistance", false, "default rTurnOn (one resistor)"),
   qty("cost", "Resistor cost", "cost"),
 ];
 
@@ -107,10 +107,10 @@ export const CONDUCTION_FIELDS: EditorField[] = [
 ];
 export const POINT_COLUMNS: ColumnDef[] = [
   { key: "vin", label: "Vin", type: "qty", dim: "voltage" },
-  { key: "vdsOn", label: "Vds at turn-on", type: "qty", dim: "voltage" },
-  { key: "idOn", label: "Id at turn-on", type: "qty", dim: "current" },
-  { key: "vdsOff", label: "Vds at turn-off", type: "qty", dim: "voltage" },
-  { key: "idOff", label: "Id at turn-off", type: "qty", dim: "current" },
+  { key: "turnOnVds", label: "Vds at turn-on", type: "qty", dim: "voltage" },
+  { key: "turnOnId", label: "Id at turn-on", type: "qty", dim: "current" },
+  { key: "turnOffVds", label: "Vds at turn-off", type: "qty", dim: "voltage" },
+  { key: "turnOffId", label: "Id at turn-off", type: "qty", dim: "current" },
   { key: "iRms", label: "I rms", type: "qty", dim: "current" },
   { key: "iAvg", label: "I avg", type: "qty", dim: "current" },
   { key: "duty", label: "Duty", type: "qty", dim: "ratio" },
