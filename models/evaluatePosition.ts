@@ -74,7 +74,7 @@ export function computePosition(prep: Prepared, pp: PreparedPosition, ci: number
       L[me + M.reverseRecovery] += recoveryLoss({ qrr: p.conduction.opposingQrr, v: w.vdsOn, fsw });
     }
     // An SR whose body diode takes over the current after turn-off (t2 > 0) has
-    // only Vsd across it during the edge; vdsOff is then the voltage it blocks later.
+    // only Vsd across it during the edge; turnOffVds is then the voltage it blocks later.
     const srDiodeCatches = p.role === "synchronous-rectifier" && p.conduction.deadTimes[1] > 0;
     const vOffEdge = srDiodeCatches ? Math.min(m.vsd, w.vdsOff) : w.vdsOff;
     turnOff = hardEdge({ vds: vOffEdge, id: w.idOff, iGate: st.off.iPlateau, qgd, qgs2: q2, fsw });
