@@ -7,7 +7,7 @@
  * switch node rests at Vin.
  */
 import { formatQuantity } from "../quantityFormat";
-import { boundaryNote, isRefusal, stageOrRefusal, type BuildResult, type Context } from "./built";
+import { inductor, isRefusal, rampEnds, stageFields, stageOrRefusal, type BuildResult, type Context } from "./built";
 import { primarySwitch, rectifier } from "./positions";
 import { conducts, off, on } from "./spans";
 
@@ -24,9 +24,7 @@ export function buildBoost(c: Context): BuildResult {
   if (isRefusal(st)) return st;
   const T = st.period;
   const rise = (c.vinE * st.d * T) / l;
-  const avgCcm = iout / (1 - st.d);
-  const [valley, peak] = st.mode === "continuous" ? [avgCcm - rise / 2, avgCcm + rise / 2] : [0, rise];
-  const avg = ((peak + valley) / 2) * (st.d + st.d2);
+  const [valley, peak] = rampEnds(st.mode, iout / (1 - st.d), rise);
   const q1 = primarySwitch("Q1", "Boost switch");
   const r = rectifier(c.sync, 1, "Output rectifier");
   const rect = conducts(c.sync);
@@ -40,14 +38,8 @@ export function buildBoost(c: Context): BuildResult {
         { dt: (1 - st.d - st.d2) * T, dev: { Q1: off(vin), [r.id]: off(vout - vin) } },
       ],
     },
-    inductors: [{ name: "L", label: "Inductor", avg, peak, valley, ripple: peak - valley }],
+    inductors: [inductor("L", "Inductor", valley, peak, st.d + st.d2)],
     input: [{ id: "Q1", sign: 1 }, { id: r.id, sign: 1 }],
-    mode: st.mode,
-    fsw: 1 / T,
-    duty: st.d,
-    dutyFreewheel: st.d2,
-    k: st.k,
-    kCrit: st.kCrit,
-    notes: boundaryNote(st.mode, 1 / T, c.spec.fsw),
+    ...stageFields(st, c.spec.fsw),
   };
 }

@@ -20,7 +20,7 @@
  * capacitances is ignored: common practice); in DCM idle each rectifier
  * blocks Vout. Losses lumped at the input (built.ts).
  */
-import { isRefusal, boundaryNote, type BuildResult, type Context } from "./built";
+import { inductor, isRefusal, stageFields, type BuildResult, type Context } from "./built";
 import { outputStage } from "./outputStage";
 import { primarySwitch, rectifier } from "./positions";
 import { conducts, off, on, spansBetween, type DeviceState } from "./spans";
@@ -34,7 +34,6 @@ export function buildBridge(c: Context, full: boolean): BuildResult {
   if (isRefusal(lo)) return lo;
   const half = lo.period;
   const T = 2 * half;
-  const d = lo.d / 2;
   const tOn = lo.d * half;
   const tFree = tOn + lo.d2 * half;
   const rect = conducts(c.sync);
@@ -68,17 +67,8 @@ export function buildBridge(c: Context, full: boolean): BuildResult {
   const highSides = full ? ["Q1", "Q3"] : ["Q1"];
   return {
     timeline: { period: T, positions: [...primaries, r1, r2], spans },
-    inductors: [{
-      name: "Lo", label: "Output inductor (ripple at twice the switching frequency)",
-      avg: ((lo.peak + lo.valley) / 2) * (lo.d + lo.d2), peak: lo.peak, valley: lo.valley, ripple: lo.peak - lo.valley,
-    }],
+    inductors: [inductor("Lo", "Output inductor (ripple at twice the switching frequency)", lo.valley, lo.peak, lo.d + lo.d2)],
     input: highSides.map((id) => ({ id, sign: 1 as const })),
-    mode: lo.mode,
-    fsw: 1 / T,
-    duty: d,
-    dutyFreewheel: lo.d2,
-    k: lo.k,
-    kCrit: lo.kCrit,
-    notes: boundaryNote(lo.mode, 1 / T, c.spec.fsw),
+    ...stageFields(lo, c.spec.fsw, 2),
   };
 }

@@ -9,7 +9,7 @@
  * node rests at Vout (its ringing with the device capacitances is ignored).
  */
 import { formatQuantity } from "../quantityFormat";
-import { boundaryNote, isRefusal, stageOrRefusal, type BuildResult, type Context } from "./built";
+import { inductor, isRefusal, rampEnds, stageFields, stageOrRefusal, type BuildResult, type Context } from "./built";
 import { primarySwitch, rectifier } from "./positions";
 import { conducts, off, on } from "./spans";
 
@@ -26,7 +26,7 @@ export function buildBuck(c: Context): BuildResult {
   if (isRefusal(st)) return st;
   const T = st.period;
   const rise = ((c.vinE - vout) * st.d * T) / l;
-  const [valley, peak] = st.mode === "continuous" ? [iout - rise / 2, iout + rise / 2] : [0, rise];
+  const [valley, peak] = rampEnds(st.mode, iout, rise);
   const q1 = primarySwitch("Q1", "High-side switch");
   const r = rectifier(c.sync, 1, "Low-side rectifier");
   const rect = conducts(c.sync);
@@ -40,14 +40,8 @@ export function buildBuck(c: Context): BuildResult {
         { dt: (1 - st.d - st.d2) * T, dev: { Q1: off(vin - vout), [r.id]: off(vout) } },
       ],
     },
-    inductors: [{ name: "L", label: "Inductor", avg: ((peak + valley) / 2) * (st.d + st.d2), peak, valley, ripple: peak - valley }],
+    inductors: [inductor("L", "Inductor", valley, peak, st.d + st.d2)],
     input: [{ id: "Q1", sign: 1 }],
-    mode: st.mode,
-    fsw: 1 / T,
-    duty: st.d,
-    dutyFreewheel: st.d2,
-    k: st.k,
-    kCrit: st.kCrit,
-    notes: boundaryNote(st.mode, 1 / T, c.spec.fsw),
+    ...stageFields(st, c.spec.fsw),
   };
 }

@@ -6,20 +6,38 @@
 import { formatQuantity } from "../quantityFormat";
 import { isConflict, solveStage, type StageInput, type StageSolution } from "./dcm";
 import type { Timeline } from "./spans";
-import type { ConductionMode, ConverterSpec, InductorFigures, Refusal } from "./types";
+import type { ConductionMode, ConverterSpec, InductorFigures, OperatingPoint, Refusal } from "./types";
 
-export interface Built {
+/** The converter-level figures that follow from the solved stage. */
+export type StageFields = Pick<OperatingPoint, "mode" | "fsw" | "duty" | "dutyFreewheel" | "k" | "kCrit" | "notes">;
+
+export interface Built extends StageFields {
   timeline: Timeline;
   inductors: InductorFigures[];
   /** Devices whose average currents make up the input current (sign −1: returned to the input). */
   input: { id: string; sign: 1 | -1 }[];
-  mode: ConductionMode;
-  fsw: number;
-  duty: number;
-  dutyFreewheel: number;
-  k: number;
-  kCrit: number;
-  notes: string[];
+}
+
+/**
+ * A solved stage's converter-level figures. A bridge's output stage runs
+ * `perSwitch` = 2 stage periods per switching period, with twice the duty.
+ */
+export function stageFields(st: StageSolution, askedFsw: number, perSwitch = 1): StageFields {
+  const fsw = 1 / (st.period * perSwitch);
+  return {
+    mode: st.mode, fsw, duty: st.d / perSwitch, dutyFreewheel: st.d2, k: st.k, kCrit: st.kCrit,
+    notes: boundaryNote(st.mode, fsw, askedFsw),
+  };
+}
+
+/** Valley and peak of an inductor current that rises by `rise`: about its CCM average, else from zero. */
+export function rampEnds(mode: ConductionMode, avgCcm: number, rise: number): [number, number] {
+  return mode === "continuous" ? [avgCcm - rise / 2, avgCcm + rise / 2] : [0, rise];
+}
+
+/** An inductor conducting (valley → peak → valley) for the fraction `conducting` of its period. */
+export function inductor(name: InductorFigures["name"], label: string, valley: number, peak: number, conducting: number): InductorFigures {
+  return { name, label, avg: ((peak + valley) / 2) * conducting, peak, valley, ripple: peak - valley };
 }
 
 export type BuildResult = Built | Refusal;

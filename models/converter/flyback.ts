@@ -17,7 +17,7 @@
  * capacitances (valley switching) is ignored, and the Vds reported before a
  * DCM or boundary turn-on is that ideal value, not the valley.
  */
-import { boundaryNote, isRefusal, stageOrRefusal, type BuildResult, type Context } from "./built";
+import { inductor, isRefusal, rampEnds, stageFields, stageOrRefusal, type BuildResult, type Context } from "./built";
 import { primarySwitch, rectifier } from "./positions";
 import { conducts, off, on } from "./spans";
 
@@ -33,8 +33,7 @@ export function buildFlyback(c: Context): BuildResult {
   if (isRefusal(st)) return st;
   const T = st.period;
   const rise = (c.vinE * st.d * T) / lm;
-  const avgCcm = iout / (n * (1 - st.d));
-  const [valley, peak] = st.mode === "continuous" ? [avgCcm - rise / 2, avgCcm + rise / 2] : [0, rise];
+  const [valley, peak] = rampEnds(st.mode, iout / (n * (1 - st.d)), rise);
   const q1 = primarySwitch("Q1", "Primary switch");
   const r = rectifier(c.sync, 1, "Secondary rectifier");
   const rect = conducts(c.sync);
@@ -48,17 +47,8 @@ export function buildFlyback(c: Context): BuildResult {
         { dt: (1 - st.d - st.d2) * T, dev: { Q1: off(vin), [r.id]: off(vout) } },
       ],
     },
-    inductors: [{
-      name: "Lm", label: "Magnetizing inductance (primary-referred)",
-      avg: ((peak + valley) / 2) * (st.d + st.d2), peak, valley, ripple: peak - valley,
-    }],
+    inductors: [inductor("Lm", "Magnetizing inductance (primary-referred)", valley, peak, st.d + st.d2)],
     input: [{ id: "Q1", sign: 1 }],
-    mode: st.mode,
-    fsw: 1 / T,
-    duty: st.d,
-    dutyFreewheel: st.d2,
-    k: st.k,
-    kCrit: st.kCrit,
-    notes: boundaryNote(st.mode, 1 / T, c.spec.fsw),
+    ...stageFields(st, c.spec.fsw),
   };
 }

@@ -13,7 +13,7 @@
  * lumped at the input (built.ts), the Lm ringing after the reset ignored.
  */
 import { formatQuantity } from "../quantityFormat";
-import { boundaryNote, isRefusal, type BuildResult, type Context } from "./built";
+import { boundaryNote, inductor, isRefusal, stageFields, type BuildResult, type Context } from "./built";
 import { outputStage } from "./outputStage";
 import { primarySwitch, rectifier } from "./positions";
 import { conducts, diode, off, on, spansBetween } from "./spans";
@@ -57,22 +57,17 @@ export function buildForwardResetWinding(c: Context): BuildResult {
       [r2.id]: powering ? off(vin / n) : freewheeling ? rect(lo.at(t0), lo.at(t1)) : off(vout),
     };
   });
-  const notes = boundaryNote(lo.mode, 1 / T, c.spec.fsw);
+  const notes = [...boundaryNote(lo.mode, 1 / T, c.spec.fsw)];
   if (tOn + tReset > T * (1 - 1e-9))
     notes.push(`the reset takes the whole off time at D = ${d.toFixed(3)}: Q1 turns on at Vin·(1 + Np/Nr) = ${formatQuantity(vin * (1 + a), "voltage")}`);
   return {
     timeline: { period: T, positions: [q1, d3, r1, r2], spans },
     inductors: [
-      { name: "Lo", label: "Output inductor", avg: ((lo.peak + lo.valley) / 2) * (d + lo.d2), peak: lo.peak, valley: lo.valley, ripple: lo.peak - lo.valley },
+      inductor("Lo", "Output inductor", lo.valley, lo.peak, d + lo.d2),
       { name: "Lm", label: "Magnetizing inductance (primary-referred)", avg: (dIm / 2) * (d + d / a), peak: dIm, valley: 0, ripple: dIm },
     ],
     input: [{ id: "Q1", sign: 1 }, { id: "D3", sign: -1 }],
-    mode: lo.mode,
-    fsw: 1 / T,
-    duty: d,
-    dutyFreewheel: lo.d2,
-    k: lo.k,
-    kCrit: lo.kCrit,
+    ...stageFields(lo, c.spec.fsw),
     notes,
   };
 }

@@ -20,7 +20,7 @@
  * capacitor large (constant Vc), losses lumped at the input (built.ts).
  */
 import { formatQuantity } from "../quantityFormat";
-import { boundaryNote, isRefusal, type BuildResult, type Context } from "./built";
+import { inductor, isRefusal, stageFields, type BuildResult, type Context } from "./built";
 import { outputStage } from "./outputStage";
 import { primarySwitch, rectifier } from "./positions";
 import { conducts, diode, off, on, spansBetween } from "./spans";
@@ -86,20 +86,16 @@ export function buildForwardActiveClamp(c: Context): BuildResult {
       [r2.id]: rect(lo.at(a) - share, lo.at(b) - share),
     };
   });
+  const fields = stageFields(lo, c.spec.fsw);
   return {
     timeline: { period: T, positions: [q1, q2, r1, r2], spans },
     inductors: [
-      { name: "Lo", label: "Output inductor", avg: ((lo.peak + lo.valley) / 2) * (d + lo.d2), peak: lo.peak, valley: lo.valley, ripple: lo.peak - lo.valley },
+      inductor("Lo", "Output inductor", lo.valley, lo.peak, d + lo.d2),
       { name: "Lm", label: "Magnetizing inductance (primary-referred)", avg: ((-dIm / 2) * t2) / T, peak: dIm / 2, valley: -dIm / 2, ripple: dIm },
     ],
     // The clamp capacitor's charge balance makes Q2's average current zero: only Q1 draws from the input.
     input: [{ id: "Q1", sign: 1 }],
-    mode: lo.mode,
-    fsw: 1 / T,
-    duty: d,
-    dutyFreewheel: lo.d2,
-    k: lo.k,
-    kCrit: lo.kCrit,
-    notes: [...boundaryNote(lo.mode, 1 / T, c.spec.fsw), `clamp voltage ${formatQuantity(vc, "voltage")} across the winding while Q2 conducts`],
+    ...fields,
+    notes: [...fields.notes, `clamp voltage ${formatQuantity(vc, "voltage")} across the winding while Q2 conducts`],
   };
 }

@@ -5,14 +5,10 @@
 // centre-tapped secondary),
 // driven open loop with the calculator's duty from its periodic state and
 // measured in the last period (converterBench.ts).
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { ConverterSpec, OperatingPoint } from "@/models/converter/types";
+import type { ConverterSpec, OperatingPoint, PositionFigures } from "@/models/converter/types";
 import { sp } from "./ngspice";
-import { Ratios, calcPoint, diodePos, gate, mosfet } from "./converterDeck";
-import { checkConverter, checkPosition, runBench, type Bench, type Values } from "./converterBench";
-
-const ratios = new Ratios();
-afterAll(() => console.log(`bridges, worst model/ngspice ratio per figure:\n${ratios.worst()}`));
+import { diodePos, gate, mosfet } from "./converterDeck";
+import { benchSuite, type Bench } from "./converterBench";
 
 const K = "0.9999999";
 
@@ -109,39 +105,20 @@ const fb: ConverterSpec = {
   topology: "full-bridge", vin: 400, vout: 48, iout: 10, fsw: 100e3, efficiency: 1, turnsRatio: 3,
   filterInductance: 47e-6, rectifier: "diode", mode: "auto",
 };
-const CASES: Record<string, { spec: ConverterSpec; mode: string; full: boolean }> = {
-  "half bridge ccm": { spec: hb, mode: "continuous", full: false },
-  "half bridge dcm": { spec: { ...hb, iout: 0.5, rectifier: "diode" }, mode: "discontinuous", full: false },
-  "full bridge ccm": { spec: fb, mode: "continuous", full: true },
-  "full bridge dcm": { spec: { ...fb, iout: 1 }, mode: "discontinuous", full: true },
-};
-const runs: Record<string, { p: OperatingPoint; v: Values }> = {};
+// DCM idle: with the magnetizing current neglected no device conducts and nothing sets
+// the voltages (a real bridge rings around the calculator's Vin/2 and Vout on its
+// capacitances); in the simulation the small magnetizing current flows on through a
+// rectifier. So the voltages entering idle (primary Vds before turn-on, a rectifier's
+// Vds after its zero-current turn-off) are not compared there.
+const idle = (pos: PositionFigures) => ({
+  opts: { skipTurnOnVds: pos.role === "primary", skipTurnOffVds: pos.role !== "primary" && pos.turnOff.zeroCurrent },
+});
+const halfBridge = (spec: ConverterSpec, p: OperatingPoint) => bench(spec, p, false);
+const fullBridge = (spec: ConverterSpec, p: OperatingPoint) => bench(spec, p, true);
 
-beforeAll(async () => {
-  for (const [k, c] of Object.entries(CASES)) {
-    const p = calcPoint(c.spec);
-    runs[k] = { p, v: await runBench(p, bench(c.spec, p, c.full)) };
-  }
-}, 60_000);
-
-describe.each(Object.keys(CASES))("%s: calculator vs ngspice", (k) => {
-  it("mode, steady state, output voltage with the computed duty, input current", () => {
-    const { p, v } = runs[k];
-    expect(p.mode).toBe(CASES[k].mode);
-    checkConverter(ratios, k, p, CASES[k].spec.vout, v);
-  });
-  it("each switch position: duty, currents, edges, voltages", () => {
-    const { p, v } = runs[k];
-    // DCM idle: with the magnetizing current neglected no device conducts and nothing sets
-    // the voltages (a real bridge rings around the calculator's Vin/2 and Vout on its
-    // capacitances); in the simulation the small magnetizing current flows on through a
-    // rectifier. So the voltages entering idle (primary Vds before turn-on, a rectifier's
-    // Vds after its zero-current turn-off) are not compared there.
-    const idle = p.mode === "discontinuous";
-    for (const pos of p.positions)
-      checkPosition(ratios, k, pos, v, {
-        skipTurnOnVds: idle && pos.role === "primary",
-        skipTurnOffVds: idle && pos.role !== "primary" && pos.turnOff.zeroCurrent,
-      });
-  });
+benchSuite("bridges", {
+  "half bridge ccm": { spec: hb, mode: "continuous", bench: halfBridge },
+  "half bridge dcm": { spec: { ...hb, iout: 0.5, rectifier: "diode" }, mode: "discontinuous", bench: halfBridge, position: idle },
+  "full bridge ccm": { spec: fb, mode: "continuous", bench: fullBridge },
+  "full bridge dcm": { spec: { ...fb, iout: 1 }, mode: "discontinuous", bench: fullBridge, position: idle },
 });

@@ -5,14 +5,10 @@
 // the efficiency estimate as the calculator does, an input resistor before
 // a large input capacitor dropping (1 − η)·Vin: the currents and the duty
 // must then follow the efficiency too.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { ConverterSpec, OperatingPoint, PositionFigures } from "@/models/converter/types";
 import { sp } from "./ngspice";
-import { Ratios, calcPoint, diodePos, gate, mosfet } from "./converterDeck";
-import { checkConverter, checkPosition, runBench, type Bench, type Values } from "./converterBench";
-
-const ratios = new Ratios();
-afterAll(() => console.log(`buck and boost, worst model/ngspice ratio per figure:\n${ratios.worst()}`));
+import { diodePos, gate, mosfet } from "./converterDeck";
+import { benchSuite, type Bench } from "./converterBench";
 
 /**
  * The run starts at Q1's turn-on in the calculator's periodic state (inductor
@@ -110,37 +106,15 @@ const boost: ConverterSpec = {
   topology: "boost", vin: 12, vout: 24, iout: 2, fsw: 200e3, efficiency: 1, filterInductance: 22e-6,
   rectifier: "synchronous", deadTimes: [100e-9, 100e-9], mode: "auto",
 };
-const CASES: Record<string, { spec: ConverterSpec; mode: string; bench: typeof buckBench }> = {
+// With the efficiency as an input drop the simulated devices see η·Vin, the calculator
+// reports the full Vin (its blocking voltages are upper bounds): compared against η·V.
+const ETA = 0.9;
+const atEtaVin = (pos: PositionFigures) => ({ pos: voltagesTimes(pos, ETA) });
+
+benchSuite("buck and boost", {
   "buck ccm": { spec: buck, mode: "continuous", bench: buckBench },
   "buck dcm": { spec: { ...buck, iout: 1, rectifier: "diode" }, mode: "discontinuous", bench: buckBench },
-  "buck ccm η 0.9": { spec: { ...buck, efficiency: 0.9 }, mode: "continuous", bench: buckBench },
+  "buck ccm η 0.9": { spec: { ...buck, efficiency: ETA }, mode: "continuous", bench: buckBench, position: atEtaVin },
   "boost ccm": { spec: boost, mode: "continuous", bench: boostBench },
   "boost dcm": { spec: { ...boost, iout: 0.2, rectifier: "diode" }, mode: "discontinuous", bench: boostBench },
-};
-const runs: Record<string, { p: OperatingPoint; v: Values }> = {};
-
-beforeAll(async () => {
-  for (const [k, c] of Object.entries(CASES)) {
-    const p = calcPoint(c.spec);
-    runs[k] = { p, v: await runBench(p, c.bench(c.spec, p)) };
-  }
-}, 60_000);
-
-describe.each(Object.keys(CASES))("%s: calculator vs ngspice", (k) => {
-  it("mode, steady state, output voltage with the computed duty, input current", () => {
-    const { p, v } = runs[k];
-    expect(p.mode).toBe(CASES[k].mode);
-    checkConverter(ratios, k, p, CASES[k].spec.vout, v);
-  });
-  it("each switch position: duty, currents, edges, voltages", () => {
-    const { p, v } = runs[k];
-    // With the efficiency as an input drop the simulated devices see η·Vin, the calculator
-    // reports the full Vin (its blocking voltages are upper bounds): compare against η·V.
-    const eta = CASES[k].spec.efficiency;
-    if (eta < 1) {
-      for (const pos of p.positions) checkPosition(ratios, k, voltagesTimes(pos, eta), v);
-      return;
-    }
-    for (const pos of p.positions) checkPosition(ratios, k, pos, v);
-  });
 });

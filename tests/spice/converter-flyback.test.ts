@@ -6,14 +6,10 @@
 // driven open loop with the calculator's duty, so the output voltage the
 // simulation settles at checks the duty; every other figure is measured
 // with `meas` over the last period (converterBench.ts).
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { ConverterSpec, OperatingPoint } from "@/models/converter/types";
 import { sp } from "./ngspice";
-import { Ratios, calcPoint, diodePos, gate, mosfet } from "./converterDeck";
-import { checkConverter, checkPosition, runBench, type Bench, type Values } from "./converterBench";
-
-const ratios = new Ratios();
-afterAll(() => console.log(`flyback, worst model/ngspice ratio per figure:\n${ratios.worst()}`));
+import { diodePos, gate, mosfet } from "./converterDeck";
+import { benchSuite, type Bench } from "./converterBench";
 
 /** Secondary dot arranged so the rectifier blocks while Q1 conducts; current-sink load with an RC damper. */
 function bench(spec: ConverterSpec, p: OperatingPoint): Bench {
@@ -58,31 +54,12 @@ const base: ConverterSpec = {
   topology: "flyback", vin: 24, vout: 5, iout: 6, fsw: 100e3, efficiency: 1, turnsRatio: 2,
   magnetizingInductance: 10e-6, rectifier: "synchronous", deadTimes: [100e-9, 50e-9], mode: "auto",
 };
-const CASES: Record<string, ConverterSpec> = {
-  ccm: { ...base },
-  dcm: { ...base, vin: 36, iout: 2, rectifier: "diode" },
-  bcm: { ...base, vin: 36, rectifier: "diode", mode: "boundary" },
-};
-const MODES: Record<string, string> = { ccm: "continuous", dcm: "discontinuous", bcm: "boundary" };
-const runs: Record<string, { p: OperatingPoint; v: Values }> = {};
+// Boundary: the rectifier current reaches zero just as Q1 turns on, so a sample a hair
+// before turn-on sits on the collapsing edge of Vds: not compared there.
+const onEdge = () => ({ opts: { skipTurnOnVds: true } });
 
-beforeAll(async () => {
-  for (const [k, spec] of Object.entries(CASES)) {
-    const p = calcPoint(spec);
-    runs[k] = { p, v: await runBench(p, bench(spec, p)) };
-  }
-}, 60_000);
-
-describe.each(Object.keys(CASES))("flyback %s: calculator vs ngspice", (k) => {
-  it("mode, steady state, output voltage with the computed duty, input current", () => {
-    const { p, v } = runs[k];
-    expect(p.mode).toBe(MODES[k]);
-    checkConverter(ratios, k, p, CASES[k].vout, v);
-  });
-  it("each switch position: duty, currents, edges, voltages", () => {
-    const { p, v } = runs[k];
-    // Boundary: the rectifier current reaches zero just as Q1 turns on, so a sample a
-    // hair before turn-on sits on the collapsing edge of Vds.
-    for (const pos of p.positions) checkPosition(ratios, k, pos, v, { skipTurnOnVds: k === "bcm" });
-  });
+benchSuite("flyback", {
+  ccm: { spec: base, mode: "continuous", bench },
+  dcm: { spec: { ...base, vin: 36, iout: 2, rectifier: "diode" }, mode: "discontinuous", bench },
+  bcm: { spec: { ...base, vin: 36, rectifier: "diode", mode: "boundary" }, mode: "boundary", bench, position: onEdge },
 });

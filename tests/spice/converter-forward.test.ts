@@ -3,14 +3,10 @@
 // with Ron = 1 mΩ, steep diodes, windings coupled with K = 0.99999), driven
 // open loop with the calculator's duty and measured in the last period
 // (converterBench.ts).
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { ConverterSpec, OperatingPoint } from "@/models/converter/types";
 import { sp } from "./ngspice";
-import { Ratios, calcPoint, diodePos, gate, mosfet } from "./converterDeck";
-import { checkConverter, checkPosition, runBench, type Bench, type Values } from "./converterBench";
-
-const ratios = new Ratios();
-afterAll(() => console.log(`forward, worst model/ngspice ratio per figure:\n${ratios.worst()}`));
+import { diodePos, gate, mosfet } from "./converterDeck";
+import { benchSuite, type Bench } from "./converterBench";
 
 const K = "0.999999";
 
@@ -124,29 +120,9 @@ const reset: ConverterSpec = {
 const clamp: ConverterSpec = {
   ...reset, forwardReset: "active-clamp", fsw: 250e3, magnetizingInductance: 150e-6, filterInductance: 6.8e-6,
 };
-const CASES: Record<string, { spec: ConverterSpec; mode: string; bench: typeof resetBench }> = {
+benchSuite("forward", {
   "reset winding ccm": { spec: reset, mode: "continuous", bench: resetBench },
   "reset winding dcm": { spec: { ...reset, iout: 1, rectifier: "diode" }, mode: "discontinuous", bench: resetBench },
   "active clamp ccm": { spec: clamp, mode: "continuous", bench: clampBench },
   "active clamp, diodes": { spec: { ...clamp, rectifier: "diode" }, mode: "continuous", bench: clampBench },
-};
-const runs: Record<string, { p: OperatingPoint; v: Values }> = {};
-
-beforeAll(async () => {
-  for (const [k, c] of Object.entries(CASES)) {
-    const p = calcPoint(c.spec);
-    runs[k] = { p, v: await runBench(p, c.bench(c.spec, p)) };
-  }
-}, 60_000);
-
-describe.each(Object.keys(CASES))("forward, %s: calculator vs ngspice", (k) => {
-  it("mode, steady state, output voltage with the computed duty, input current", () => {
-    const { p, v } = runs[k];
-    expect(p.mode).toBe(CASES[k].mode);
-    checkConverter(ratios, k, p, CASES[k].spec.vout, v);
-  });
-  it("each switch position: duty, currents, edges, voltages", () => {
-    const { p, v } = runs[k];
-    for (const pos of p.positions) checkPosition(ratios, k, pos, v);
-  });
 });

@@ -4,10 +4,10 @@
 // sample comes from the drive schedule the deck imposes (the calculator's
 // duty and the dead times); zero-current and zero-voltage figures are
 // compared in absolute terms against the position's own scale.
-import { expect } from "vitest";
-import type { OperatingPoint, PositionFigures } from "@/models/converter/types";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { ConverterSpec, OperatingPoint, PositionFigures } from "@/models/converter/types";
 import { runNgspice } from "./ngspice";
-import { BAND, Ratios, STEADY, at, avg, closeTo, deck, edgeSamples, extrapolated, rms } from "./converterDeck";
+import { BAND, Ratios, STEADY, at, avg, calcPoint, closeTo, deck, edgeSamples, extrapolated, rms } from "./converterDeck";
 import { sp } from "./ngspice";
 
 export interface Probe {
@@ -141,4 +141,40 @@ export function checkPosition(ratios: Ratios, label: string, pos: PositionFigure
     compare(ratios, name("device iAvg"), pos.deviceIAvg, f("davg"), C, iScale);
     compare(ratios, name("device iRms"), pos.deviceIRms, f("drms"), C, iScale);
   }
+}
+
+export interface BenchCase {
+  spec: ConverterSpec;
+  /** The conduction mode the calculator must find. */
+  mode: string;
+  bench: (spec: ConverterSpec, p: OperatingPoint) => Bench;
+  /** What to compare for a position, when not everything as it is (say why at the case). */
+  position?: (pos: PositionFigures, p: OperatingPoint) => { pos?: PositionFigures; opts?: CheckOptions };
+}
+
+/** Simulate every case once, then compare the converter and each position; print the worst agreement per figure. */
+export function benchSuite(name: string, cases: Record<string, BenchCase>): void {
+  const ratios = new Ratios();
+  const runs: Record<string, { p: OperatingPoint; v: Values }> = {};
+  beforeAll(async () => {
+    for (const [k, c] of Object.entries(cases)) {
+      const p = calcPoint(c.spec);
+      runs[k] = { p, v: await runBench(p, c.bench(c.spec, p)) };
+    }
+  }, 60_000);
+  afterAll(() => console.log(`${name}, worst model/ngspice agreement per figure:\n${ratios.worst()}`));
+  describe.each(Object.keys(cases))(`${name}, %s: calculator vs ngspice`, (k) => {
+    it("mode, steady state, output voltage with the computed duty, input current", () => {
+      const { p, v } = runs[k];
+      expect(p.mode).toBe(cases[k].mode);
+      checkConverter(ratios, k, p, cases[k].spec.vout, v);
+    });
+    it("each switch position: duty, currents, edges, voltages", () => {
+      const { p, v } = runs[k];
+      for (const pos of p.positions) {
+        const how = cases[k].position?.(pos, p) ?? {};
+        checkPosition(ratios, k, how.pos ?? pos, v, how.opts);
+      }
+    });
+  });
 }

@@ -1,10 +1,10 @@
 // The budget dashboard runs these modules in the browser (what-if trials and
 // the thermal-map worker). They must not pull in the unit parser (mathjs) or
 // the schema (zod): those stay on the server, which is what keeps the page's
-// JavaScript small. The converter operating-point calculator is meant to run
-// there too (the forms compute the waveform figures as the user types).
-// esbuild bundles each entry as the browser would get it
-// and lists every file it read.
+// JavaScript small. The converter operating-point calculator is kept
+// browser-safe in the same way, so a page can run it without the server.
+// esbuild bundles each entry as the browser would get it and lists every
+// file it read.
 import path from "node:path";
 import { build } from "esbuild";
 import { describe, expect, it } from "vitest";
