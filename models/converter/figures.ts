@@ -2,9 +2,10 @@
  * Per-position figures from a period's spans: duty, edges, RMS and average
  * currents, body-diode intervals, blocking voltages. A straight-line current
  * segment from i0 to i1 lasting dt contributes dt·(i0 + i1)/2 to the charge
- * and dt·(i0² + i0·i1 + i1²)/3 to the integral of i² (exact for a linear
- * segment; Erickson & Maksimović 3rd ed. 2020, appendix A, RMS of
- * piecewise-linear waveforms).
+ * and dt·(i0² + i0·i1 + i1²)/3 to the integral of i² (closed form, exact
+ * for a straight segment; Erickson & Maksimović 3rd ed. tabulate the same
+ * results in their appendix on RMS values of converter waveforms, recalled
+ * from memory).
  */
 import { runsOf, startTimes, type PositionInfo, type Run, type Span, type Timeline } from "./spans";
 import type { BodyDiodeFigures, DiodeInterval, EdgeFigure, PositionFigures } from "./types";
