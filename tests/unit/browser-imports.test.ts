@@ -1,14 +1,16 @@
 // The budget dashboard runs these modules in the browser (what-if trials and
 // the thermal-map worker). They must not pull in the unit parser (mathjs) or
 // the schema (zod): those stay on the server, which is what keeps the page's
-// JavaScript small. esbuild bundles each entry as the browser would get it
-// and lists every file it read.
+// JavaScript small. The converter operating-point calculator is kept
+// browser-safe in the same way, so a page can run it without the server.
+// esbuild bundles each entry as the browser would get it and lists every
+// file it read.
 import path from "node:path";
 import { build } from "esbuild";
 import { describe, expect, it } from "vitest";
 
 const ROOT = path.resolve(__dirname, "../..");
-const ENTRIES = ["models/evaluate.ts", "models/sweep.ts", "components/budget/whatif.ts", "components/budget/shape.ts", "components/charts/sweep.worker.ts"];
+const ENTRIES = ["models/evaluate.ts", "models/sweep.ts", "models/converter/index.ts", "components/budget/whatif.ts", "components/budget/shape.ts", "components/charts/sweep.worker.ts"];
 
 async function inputsOf(entry: string): Promise<string[]> {
   const r = await build({
