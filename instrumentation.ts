@@ -4,6 +4,8 @@ export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME === "nodejs") {
     const { installPeerAddressHeader } = await import("./app/_lib/peer-address");
     installPeerAddressHeader();
+    const { installPageBodyGuard } = await import("./app/_lib/page-body-guard");
+    installPageBodyGuard();
     // Every app instance works the job queue (pg-boss, app/_lib/jobs.ts).
     // Not awaited: a database that is not up yet must not stop the server;
     // the workers start on the first success. JOB_WORKERS=off disables them.

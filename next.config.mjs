@@ -22,8 +22,17 @@ const nextConfig = {
   // which covers scripts and tests too.
   typescript: { ignoreBuildErrors: true },
   serverExternalPackages: ["@node-rs/argon2", "knex", "pg", "pg-boss", "pdfkit"],
-  // forbidden() in requirePageMember (app/_lib/access.ts) renders app/forbidden.tsx with a 403.
-  experimental: { authInterrupts: true },
+  experimental: {
+    // forbidden() in requirePageMember (app/_lib/access.ts) renders app/forbidden.tsx with a 403.
+    authInterrupts: true,
+    // Server actions read their bodies in Next itself, which counts while it streams; past this limit it
+    // fails the request (as a 500), so app/_lib/page-body-guard.ts refuses larger posts to page paths
+    // first, with the same bound. Our forms carry a few fields; route() bodies have the same limit.
+    serverActions: { bodySizeLimit: "256kb" },
+    // Bodies never reach the proxy (its matcher skips requests that have one); were one to, Next would
+    // copy at most this much of it for the proxy.
+    proxyClientMaxBodySize: "256kb",
+  },
   async headers() {
     return [
       {

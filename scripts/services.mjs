@@ -1,6 +1,7 @@
 // The local fakes of the outside services, on loopback only:
 // - an SMTP server (smtp-server) that keeps every message it receives in the
-//   dev_mailbox table, where the app's development inbox page reads it;
+//   dev_mailbox table, where the app's development inbox page reads it (each
+//   member sees only their own mail there);
 // - an S3-compatible object store (s3rver) with the uploads bucket.
 // Plain JavaScript on purpose: s3rver's dependency chain breaks under tsx.
 // Started by scripts/stack.ts; prints "services ready" once both listen.
@@ -25,9 +26,11 @@ const smtp = new SMTPServer({
     simpleParser(stream)
       .then(async (mail) => {
         const to = session.envelope.rcptTo.map((r) => r.address.toLowerCase());
+        // who caused it (app/_lib/mail.ts sets the header only for this catcher), for the development inbox
+        const cause = mail.headers.get("x-heatsplit-caused-by");
         await pool.query(
-          "insert into dev_mailbox (recipients, sender, subject, text_body, html_body) values ($1, $2, $3, $4, $5)",
-          [to, session.envelope.mailFrom ? session.envelope.mailFrom.address : null, mail.subject ?? "", mail.text ?? "", typeof mail.html === "string" ? mail.html : null],
+          "insert into dev_mailbox (recipients, sender, subject, text_body, html_body, caused_by) values ($1, $2, $3, $4, $5, $6)",
+          [to, session.envelope.mailFrom ? session.envelope.mailFrom.address : null, mail.subject ?? "", mail.text ?? "", typeof mail.html === "string" ? mail.html : null, typeof cause === "string" ? cause : null],
         );
         callback();
       })

@@ -157,7 +157,7 @@ async function main(): Promise<void> {
     return stopAll(1);
   }
 
-  await startLongRunning(
+  const app = await startLongRunning(
     "app",
     path.join(root, "node_modules/.bin/next"),
     ["start", "--hostname", "127.0.0.1", "--port", String(ports.app)],
@@ -170,7 +170,8 @@ async function main(): Promise<void> {
     return; // serve until Ctrl-C
   }
   if (mode === "test") {
-    const ok = await runTestSuites({ env, origin, root, argv });
+    // the body-limit tests read the server's resident memory from /proc/<pid>
+    const ok = await runTestSuites({ env: { ...env, HEATSPLIT_APP_PID: String(app.pid) }, origin, root, argv });
     return stopAll(ok ? 0 : 1);
   }
   if (mode === "bench" || mode === "load") {
@@ -205,7 +206,7 @@ function printSignIns(origin: string): void {
   const pw = "heatsplit-demo";
   console.log(`\nHeatsplit is serving on ${origin}\n\nDemo sign-ins (password for all: ${pw}):`);
   for (const u of users) console.log(`  ${u.role.padEnd(9)} ${u.email}`);
-  console.log(`\nDevelopment inbox (admin): ${origin}/dev/inbox\nPress Ctrl-C to stop everything.\n`);
+  console.log(`\nDevelopment inbox (each member's own mail): ${origin}/dev/inbox\nPress Ctrl-C to stop everything.\n`);
 }
 
 main().catch((e: Error) => {

@@ -7,14 +7,15 @@ import { can, type Permission } from "./roles";
 import { SESSION_COOKIE, setSessionCookie } from "./auth";
 import { resolveSession, type Member } from "./member";
 import type { ActionState } from "./action-state";
-import { echoesSecret, fieldErrorsOf, originAllowed, secretValuesOf, zodIssues } from "./request-guards";
+import { echoesSecret, fieldErrorsOf, originAllowed, refuseUnstorableText, secretValuesOf, zodIssues } from "./request-guards";
 
 // action(): the wrapper every server action goes through, for use with
 // useActionState(action, IDLE). Order: origin (Next checks it for actions
-// too; we insist on APP_ORIGIN) -> session -> permission -> FormData parsed
-// by the zod schema (use z.coerce for non-string fields) -> fn. fn may
-// redirect(); it returns a small state and must never put a submitted
-// password or token in it (the wrapper refuses such a state anyway).
+// too; we insist on APP_ORIGIN) -> session -> permission -> no NUL or lone
+// surrogate anywhere -> FormData parsed by the zod schema (use z.coerce for
+// non-string fields) -> fn. fn may redirect(); it returns a small state and
+// must never put a submitted password or token in it (the wrapper refuses
+// such a state anyway).
 
 type Action = (prev: ActionState, formData: FormData) => Promise<ActionState>;
 
@@ -68,9 +69,10 @@ function wrap<S extends z.ZodType>(
       const h = await headers();
       if (!originAllowed("POST", h)) return failure("This form was sent from another address. Open Heatsplit at its own address and try again.");
       const ctx = await resolveSession((await cookies()).get(SESSION_COOKIE)?.value);
-      if (ctx?.sessionRenewed) await setSessionCookie(ctx.sessionId);
+      if (ctx?.sessionRenewed) await setSessionCookie(ctx.sessionId, ctx.sessionCreatedAt);
       const refused = gate(ctx?.member ?? null, ctx !== null);
       if (refused) return refused;
+      refuseUnstorableText(raw);
       const parsed = schema.safeParse(raw);
       if (!parsed.success) return failure("Check the highlighted fields.", fieldErrorsOf(zodIssues(parsed.error)));
       const state = await inner(parsed.data, ctx?.member ?? null, h);

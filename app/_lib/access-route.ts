@@ -7,10 +7,11 @@ import { can, type Permission } from "./roles";
 import { SESSION_COOKIE, setSessionCookie } from "./auth";
 import { resolveSession, type Member } from "./member";
 import { resolveBearer } from "./api-tokens";
-import { echoesSecret, originAllowed, parseWith, readBody, secretValuesOf } from "./request-guards";
+import { echoesSecret, originAllowed, parseWith, readBody, refuseUnstorableText, secretValuesOf } from "./request-guards";
 
 // route(): the wrapper every route handler goes through. Order: origin
-// check (non-GET without an Authorization header) -> parse body/query/params (zod, 400; bad params 404) ->
+// check (non-GET without an Authorization header) -> read the body within its limit (413 while it streams)
+// -> refuse NUL and lone surrogates anywhere in body or query (400) -> parse body/query/params (zod, 400; bad params 404) ->
 // authenticate (401) -> permission gate for the role (403) -> handler. The
 // handler loads records through workspace-scoped queries (404 for another
 // workspace's), applies record-level rules, acts and returns a Response or
@@ -85,7 +86,9 @@ function wrap(
       const raw = opts.body ? await readBody(req) : undefined;
       secrets = secretValuesOf(raw);
       const body = opts.body ? parseWith(opts.body, raw, "request body") : undefined;
-      const query = opts.query ? parseWith(opts.query, Object.fromEntries(req.nextUrl.searchParams), "query") : undefined;
+      const rawQuery = Object.fromEntries(req.nextUrl.searchParams);
+      refuseUnstorableText(rawQuery); // a NUL in ?q= would otherwise reach PostgreSQL
+      const query = opts.query ? parseWith(opts.query, rawQuery, "query") : undefined;
       const p = await params;
       const parsedParams = opts.params ? opts.params.safeParse(p) : { success: true as const, data: p };
       if (!parsedParams.success) throw new AppError("not_found", "Not found.");
@@ -117,7 +120,7 @@ async function authenticate(req: NextRequest): Promise<{ member: Member | null; 
     return { member, signedIn: true };
   }
   const ctx = await resolveSession(req.cookies.get(SESSION_COOKIE)?.value);
-  if (ctx?.sessionRenewed) await setSessionCookie(ctx.sessionId);
+  if (ctx?.sessionRenewed) await setSessionCookie(ctx.sessionId, ctx.sessionCreatedAt);
   return { member: ctx?.member ?? null, signedIn: ctx !== null };
 }
 
@@ -135,7 +138,9 @@ function toResponse(result: unknown, secrets: string[], req: NextRequest): Respo
 
 function errorResponse(err: unknown, req: NextRequest): Response {
   if (err instanceof AppError) {
-    return Response.json({ error: { code: err.code, message: err.message, issues: err.issues } }, { status: err.status });
+    const retry = err.extra.retryAfterSeconds;
+    const headers = retry ? { "retry-after": String(Math.ceil(retry)) } : undefined;
+    return Response.json({ error: { code: err.code, message: err.message, issues: err.issues } }, { status: err.status, headers });
   }
   if (isDatabaseUnavailable(err)) {
     console.error(`route ${req.method} ${req.nextUrl.pathname}: database unavailable (${databaseErrorSummary(err)})`);

@@ -4,7 +4,7 @@ import { cookies, headers } from "next/headers";
 import { forbidden, notFound, redirect } from "next/navigation";
 import { AppError } from "./errors";
 import { can, type Permission } from "./roles";
-import { SESSION_COOKIE, setSessionCookie } from "./auth";
+import { SESSION_COOKIE } from "./auth";
 import { resolveSession, type Member, type SignedInContext } from "./member";
 import { PATH_HEADER, safeNextPath, signInPath } from "./paths";
 
@@ -27,14 +27,10 @@ export { route, publicRoute, reply, type RouteCtx, type PublicRouteCtx } from ".
 export { action, publicAction } from "./access-action";
 
 /** The signed-in user, their workspaces and current membership; cached per render. */
+// Pages cannot set cookies; none needs to: the cookie lives the session's
+// absolute lifetime and the database keeps the idle expiry (app/_lib/auth.ts).
 export const getSignedInContext = cache(async (): Promise<SignedInContext | null> => {
-  const ctx = await resolveSession((await cookies()).get(SESSION_COOKIE)?.value);
-  if (ctx?.sessionRenewed) {
-    // Pages cannot set cookies (only actions and route handlers can); the
-    // proxy re-sends the cookie on navigations, so failing here is harmless.
-    await setSessionCookie(ctx.sessionId).catch(() => undefined);
-  }
-  return ctx;
+  return resolveSession((await cookies()).get(SESSION_COOKIE)?.value);
 });
 
 export async function getCurrentMember(): Promise<Member | null> {

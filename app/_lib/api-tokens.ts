@@ -3,7 +3,10 @@ import crypto from "node:crypto";
 import { AppError } from "./errors";
 import { hashToken } from "./tokens";
 import type { Member } from "./member";
-import { getTokenMemberByHash, insertApiToken } from "@/db/queries/api-tokens";
+import { checkPassword } from "./accounts/sign-in";
+import { getDb } from "@/db/knex";
+import { getTokenMemberByHash, insertApiToken, revokeApiTokenById } from "@/db/queries/api-tokens";
+import { insertActivity } from "@/db/queries/activity";
 
 // Personal API tokens for scripts and CI: `Authorization: Bearer hs_...`.
 // The secret is 32 random bytes behind a recognisable prefix (so secret
@@ -38,11 +41,37 @@ export function requireSessionMember(member: Member): void {
   if (member.via !== "session") throw new AppError("forbidden", "Sign in to do this; API tokens cannot.");
 }
 
-/** Creates a token for the member in their current workspace; the secret is returned once and never stored. */
-export async function issueApiToken(member: Member, input: { name: string; expiresInDays?: number }) {
+const WRONG_PASSWORD = "That is not the password of your account.";
+
+/**
+ * Creates a token for the member in their current workspace, after checking
+ * their password again (under the sign-in throttle, so this is no way round
+ * it); the secret is returned once and never stored. Logged in the activity.
+ */
+export async function issueApiToken(member: Member, input: { name: string; expiresInDays: number; password: string }, address: string) {
   requireSessionMember(member);
+  try {
+    await checkPassword({ email: member.user.email, password: input.password, address });
+  } catch (err) {
+    if (err instanceof AppError && err.code === "unauthenticated") throw new AppError("bad_request", WRONG_PASSWORD, [{ path: "password", message: WRONG_PASSWORD }]);
+    throw err;
+  }
   const { secret, tokenHash } = createApiSecret();
-  const expiresAt = input.expiresInDays ? new Date(Date.now() + input.expiresInDays * 86_400_000) : null;
-  const token = await insertApiToken({ userId: member.user.id, workspaceId: member.workspace.id, name: input.name, tokenHash, expiresAt });
+  const expiresAt = new Date(Date.now() + input.expiresInDays * 86_400_000);
+  const token = await getDb().transaction(async (trx) => {
+    const t = await insertApiToken({ userId: member.user.id, workspaceId: member.workspace.id, name: input.name, tokenHash, expiresAt }, trx);
+    await insertActivity({ workspaceId: member.workspace.id, projectId: null, actor: member.user.id, action: "token.created", detail: { tokenId: t.id, name: t.name, expiresAt: t.expiresAt } }, trx);
+    return t;
+  });
   return { token, secret };
+}
+
+/** Revokes one of the member's own tokens; false when they have no such token. Logged once, when it happens. */
+export async function revokeOwnApiToken(member: Member, tokenId: string): Promise<boolean> {
+  requireSessionMember(member);
+  return getDb().transaction(async (trx) => {
+    const r = await revokeApiTokenById({ userId: member.user.id, workspaceId: member.workspace.id, tokenId }, trx);
+    if (r?.revokedNow) await insertActivity({ workspaceId: member.workspace.id, projectId: null, actor: member.user.id, action: "token.revoked", detail: { tokenId, name: r.name } }, trx);
+    return r !== null;
+  });
 }

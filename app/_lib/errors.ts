@@ -26,6 +26,8 @@ export class AppError extends Error {
     readonly code: AppErrorCode,
     message: string,
     readonly issues: FieldIssue[] = [],
+    /** For a 429: seconds until a retry may succeed (sent as Retry-After). */
+    readonly extra: { retryAfterSeconds?: number } = {},
   ) {
     super(message);
     this.status = STATUS[code];

@@ -18,8 +18,9 @@ export interface Member {
 export interface SignedInContext {
   user: Member["user"];
   sessionId: string;
-  /** lucia extended the session: the cookie should be re-sent where possible. */
+  /** lucia extended the session: the cookie may be re-sent where possible (it already lives the absolute lifetime). */
   sessionRenewed: boolean;
+  sessionCreatedAt: Date | null;
   memberships: MembershipRecord[];
   /** null when the user belongs to no workspace (removed from the last one). */
   member: Member | null;
@@ -41,6 +42,7 @@ export async function resolveSession(sessionId: string | undefined | null): Prom
     user: u,
     sessionId: session.id,
     sessionRenewed: session.fresh,
+    sessionCreatedAt: session.createdAt,
     memberships,
     member: current ? { user: u, workspace: current.workspace, role: current.role, sessionId: session.id, via: "session" } : null,
   };

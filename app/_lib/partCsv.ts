@@ -14,6 +14,7 @@ import Papa from "papaparse";
 import { PART_KIND_DEFS, allParamAliases, allParamKeys, allToleranceKeys, type ParamField } from "./partKinds";
 import { formatExact, formatHfeCurve, formatVoltSecond, type HfePoint } from "./partParamText";
 import { getPath, validatePartDraft, type PartValues } from "./partValues";
+import { writeCsv } from "./csv";
 
 export const MAX_IMPORT_ROWS = 5000;
 export const BASE_COLUMNS = ["kind", "manufacturer", "mpn", "description", "unit_cost_usd"] as const;
@@ -135,7 +136,7 @@ export function serializePartsCsv(parts: readonly ExportPart[]): string {
     for (const k of tolCols) row.push(p.tolerance[k] === undefined ? "" : String(p.tolerance[k]));
     return row;
   });
-  // escapeFormulae: a cell starting with = + - @ is written with a leading
-  // apostrophe so a spreadsheet does not run it; draftOfRow strips it again.
-  return Papa.unparse({ fields, data }, { newline: "\r\n", escapeFormulae: true });
+  // writeCsv quotes every cell and writes a cell starting with = + - @ with a
+  // leading apostrophe so a spreadsheet does not run it; draftOfRow strips it again.
+  return writeCsv([fields, ...data]);
 }

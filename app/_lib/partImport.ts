@@ -1,32 +1,33 @@
 import "server-only";
 import { AppError } from "./errors";
+import { readFormLimited, readTextLimited } from "./body-limit";
 import { parsePartsCsv, type CsvIssue } from "./partCsv";
 import { listPartMpnsByWorkspace, upsertPartsByMpn } from "@/db/queries/partsBulk";
 
 /** Largest CSV accepted (policy): 5 000 parts with every column is about 2 MB. */
 export const MAX_IMPORT_BYTES = 4 * 1024 * 1024;
 
+/** Multipart framing around the file: boundaries and part headers (policy). */
+const MULTIPART_SLACK_BYTES = 64 * 1024;
+
 /**
  * The CSV of an import request: the raw body as text/csv, or the `file`
- * field of a multipart form. Size checked from Content-Length first, then
- * on the bytes actually read.
+ * field of a multipart form. The size limit holds while the body streams in
+ * (app/_lib/body-limit.ts), then again on the file itself.
  */
 export async function readCsvUpload(req: Request): Promise<string> {
-  const declared = Number(req.headers.get("content-length") ?? "0");
-  if (declared > MAX_IMPORT_BYTES + 64 * 1024) throw tooLarge();
   const type = (req.headers.get("content-type") ?? "").toLowerCase();
   let text: string;
   if (type.startsWith("multipart/form-data")) {
-    const file = (await req.formData()).get("file");
+    const file = (await readFormLimited(req, MAX_IMPORT_BYTES + MULTIPART_SLACK_BYTES, tooLarge)).get("file");
     if (!(file instanceof Blob)) throw new AppError("bad_request", "Attach the CSV file as the form field \"file\".");
     if (file.size > MAX_IMPORT_BYTES) throw tooLarge();
     text = await file.text();
   } else if (type.startsWith("text/csv") || type.startsWith("text/plain")) {
-    text = await req.text();
+    text = await readTextLimited(req, MAX_IMPORT_BYTES, tooLarge);
   } else {
     throw new AppError("unsupported_media_type", "Send the CSV as text/csv or as a multipart form field \"file\".");
   }
-  if (Buffer.byteLength(text) > MAX_IMPORT_BYTES) throw tooLarge();
   if (!text.trim()) throw new AppError("bad_request", "The file is empty.");
   const nul = text.indexOf("\u0000");
   if (nul >= 0) {

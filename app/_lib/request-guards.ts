@@ -1,6 +1,7 @@
 import "server-only";
 import type { z } from "zod";
 import { AppError, type FieldIssue } from "./errors";
+import { readFormLimited, readTextLimited } from "./body-limit";
 
 // Checks shared by the route() and action() wrappers in access.ts.
 
@@ -34,46 +35,74 @@ export function parseWith<S extends z.ZodType>(schema: S, value: unknown, what: 
 }
 
 /**
- * The request body as a plain object: JSON for API clients, or an HTML
- * form's fields (urlencoded or multipart; strings, so schemas use z.coerce
- * for numbers) for plain <form method="post"> targets.
+ * PostgreSQL text and jsonb cannot hold U+0000, and refuse a lone UTF-16
+ * surrogate (which a JSON escape such as \ud800 can carry); a string with either
+ * would fail deep in a query. Refuse it up front as the caller's error,
+ * naming where it is. Keys are checked too.
  */
-/**
- * PostgreSQL text and jsonb cannot hold U+0000; a string carrying one would
- * fail deep in a query. Refuse it up front as the caller's error, naming
- * where it is.
- */
-export function refuseNulBytes(value: unknown, path = ""): void {
+export function refuseUnstorableText(value: unknown, path = ""): void {
   if (typeof value === "string") {
-    if (value.includes("\u0000")) throw new AppError("bad_request", "Text may not contain NUL (U+0000) characters.", [{ path: path || "(body)", message: "contains a NUL (U+0000) character" }]);
+    if (value.includes("\u0000")) throw unstorable(path, "contains a NUL (U+0000) character");
+    if (LONE_SURROGATE.test(value)) throw unstorable(path, "contains a lone UTF-16 surrogate (not a character)");
     return;
   }
-  if (Array.isArray(value)) return value.forEach((v, i) => refuseNulBytes(v, path ? `${path}.${i}` : String(i)));
+  if (Array.isArray(value)) return value.forEach((v, i) => refuseUnstorableText(v, path ? `${path}.${i}` : String(i)));
   if (value && typeof value === "object") {
     for (const [k, v] of Object.entries(value)) {
-      refuseNulBytes(k, path);
-      refuseNulBytes(v, path ? `${path}.${k}` : k);
+      refuseUnstorableText(k, path);
+      refuseUnstorableText(v, path ? `${path}.${k}` : k);
     }
   }
 }
 
+const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+function unstorable(path: string, message: string): AppError {
+  return new AppError("bad_request", `Text may not contain NUL characters or lone surrogates: ${path || "the body"} ${message}.`, [{ path: path || "(body)", message }]);
+}
+
+/** Deepest nesting of arrays and objects any route accepts (the design document needs about ten). */
+export const MAX_JSON_DEPTH = 64;
+
+/** True when the JSON text nests deeper than `max`: counted on the text, before parsing, without recursion. */
+export function jsonNestsDeeperThan(text: string, max: number): boolean {
+  let depth = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 0x5c) i++; // backslash: skip the escaped character
+      else if (c === 0x22) inString = false;
+    } else if (c === 0x22) inString = true;
+    else if (c === 0x5b || c === 0x7b) {
+      if (++depth > max) return true;
+    } else if (c === 0x5d || c === 0x7d) depth--;
+  }
+  return false;
+}
+
+const tooLarge = () => new AppError("payload_too_large", `The request body is too large (at most ${MAX_JSON_BODY_BYTES / 1024} kB).`);
+
+/**
+ * The request body as a plain object: JSON for API clients, or an HTML
+ * form's fields (urlencoded or multipart; strings, so schemas use z.coerce
+ * for numbers) for plain <form method="post"> targets. Read with its limit
+ * enforced while it streams (app/_lib/body-limit.ts).
+ */
 export async function readBody(req: Request): Promise<unknown> {
   const body = await readBodyRaw(req);
-  refuseNulBytes(body);
+  refuseUnstorableText(body);
   return body;
 }
 
 async function readBodyRaw(req: Request): Promise<unknown> {
   const type = (req.headers.get("content-type") ?? "").toLowerCase();
-  const declared = Number(req.headers.get("content-length") ?? 0);
-  if (declared > MAX_JSON_BODY_BYTES) throw new AppError("payload_too_large", "The request body is too large.");
   if (type.startsWith("application/x-www-form-urlencoded")) {
-    return Object.fromEntries(new URLSearchParams(await readLimitedText(req)));
+    return Object.fromEntries(new URLSearchParams(await readTextLimited(req, MAX_JSON_BODY_BYTES, tooLarge)));
   }
   if (type.startsWith("multipart/form-data")) {
     // Fields only; file uploads have routes of their own with their own limits.
-    if (!declared) throw new AppError("payload_too_large", "Send a Content-Length with multipart bodies.");
-    const form = await req.formData();
+    const form = await readFormLimited(req, MAX_JSON_BODY_BYTES, tooLarge);
     const out: Record<string, unknown> = {};
     for (const key of new Set(form.keys())) {
       const all = form.getAll(key);
@@ -82,19 +111,16 @@ async function readBodyRaw(req: Request): Promise<unknown> {
     return out;
   }
   if (!type.startsWith("application/json")) throw new AppError("unsupported_media_type", "Send the body as application/json.");
-  const text = await readLimitedText(req);
+  const text = await readTextLimited(req, MAX_JSON_BODY_BYTES, tooLarge);
   if (text.trim() === "") return {};
+  if (jsonNestsDeeperThan(text, MAX_JSON_DEPTH)) {
+    throw new AppError("bad_request", `The body is nested more than ${MAX_JSON_DEPTH} levels deep.`, [{ path: "(body)", message: `nested more than ${MAX_JSON_DEPTH} levels deep` }]);
+  }
   try {
     return JSON.parse(text) as unknown;
   } catch {
     throw new AppError("bad_request", "The body is not valid JSON.");
   }
-}
-
-async function readLimitedText(req: Request): Promise<string> {
-  const text = await req.text();
-  if (Buffer.byteLength(text) > MAX_JSON_BODY_BYTES) throw new AppError("payload_too_large", "The request body is too large.");
-  return text;
 }
 
 /** First message per field, for forms. */

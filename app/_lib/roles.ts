@@ -15,8 +15,11 @@ export const PERMISSIONS = {
   "derating:write": ["admin", "reviewer"],
   "option:choose": ["admin", "manager"],
   "bench:write": ["admin", "designer", "reviewer"],
+  // Background jobs (sweeps, Monte Carlo, reports) cost server time: every role that writes something may start one, a viewer may not.
+  "job:start": ["admin", "designer", "reviewer", "manager"],
   "token:own": ["admin", "designer", "reviewer", "manager", "viewer"],
-  "dev:inbox": ["admin"],
+  // Each member sees only their own mail there (app/_lib/accounts/dev-inbox.ts).
+  "dev:inbox": ["admin", "designer", "reviewer", "manager", "viewer"],
 } as const satisfies Record<string, readonly Role[]>;
 export type Permission = keyof typeof PERMISSIONS;
 

@@ -3,10 +3,14 @@ import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 
 // The activity log: append-only (the table's trigger refuses UPDATE and
-// DELETE). Revisions are logged by a trigger on option_revision; the review
-// workflow, the manager's choice and derating changes log through
-// insertActivity inside the transaction that makes the change, so a change
-// and its log entry are written together or not at all.
+// DELETE). Revisions are logged by a trigger on option_revision; every other
+// change (review, choice, derating, members, tokens, option renames and
+// archiving, parts) logs through insertActivity inside the transaction that
+// makes the change, so a change and its log entry are written together or
+// not at all. A BEFORE INSERT trigger stores the actor's and the option's
+// names as they are at that moment (migration 0009), and entries naming
+// someone else (a member, a token, a part) carry that name in their detail,
+// so a later rename never rewrites how an old entry reads.
 export type ActivityAction =
   | "revision.saved"
   | "revision.note_changed"
@@ -14,7 +18,17 @@ export type ActivityAction =
   | "review.approved"
   | "review.rejected"
   | "option.chosen"
-  | "derating.changed";
+  | "option.renamed"
+  | "option.archived"
+  | "option.restored"
+  | "derating.changed"
+  | "member.role_changed"
+  | "member.removed"
+  | "token.created"
+  | "token.revoked"
+  | "part.updated"
+  | "part.deleted"
+  | "parts.imported";
 
 export interface ActivityEntry {
   id: string;
@@ -65,20 +79,19 @@ interface ActivityRow {
 
 /**
  * A project's log in the order it happened (oldest first), with the
- * workspace-wide entries (derating policy changes) that apply to it too.
+ * workspace-wide entries (derating policy, members, tokens, parts) that
+ * apply to it too. Names are the stored ones, never joined live.
  */
 export async function listActivityByProject(
   { workspaceId, projectId, limit = 500 }: { workspaceId: string; projectId: string; limit?: number },
   db: Knex = getDb(),
 ): Promise<ActivityEntry[]> {
   const rows = await db("activity_log as a")
-    .leftJoin("design_option as o", "o.id", "a.option_id")
-    .leftJoin("auth_user as u", "u.id", "a.actor")
     .where("a.workspace_id", workspaceId)
     .andWhere((q) => q.where("a.project_id", projectId).orWhereNull("a.project_id"))
     .orderBy("a.id", "desc")
     .limit(limit)
-    .select<ActivityRow[]>("a.id", "a.project_id", "a.option_id", "o.name as option_name", "a.revision", "a.actor", "u.display_name as actor_name", "a.action", "a.detail", "a.at");
+    .select<ActivityRow[]>("a.id", "a.project_id", "a.option_id", "a.option_name", "a.revision", "a.actor", "a.actor_name", "a.action", "a.detail", "a.at");
   return rows.reverse().map((r) => ({
     id: String(r.id),
     projectId: r.project_id,

@@ -2,7 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 
-// The development mailbox that the fake SMTP server fills (scripts/services.ts).
+// The development mailbox that the fake SMTP server fills (scripts/services.mjs).
 export interface DevMailRecord {
   id: string;
   recipients: string[];
@@ -13,11 +13,10 @@ export interface DevMailRecord {
 
 const DEV_INBOX_LIMIT = 100;
 
-/** Newest first; only messages with at least one of the given recipients. */
-export async function listDevMailByRecipients(recipients: string[], db: Knex = getDb()): Promise<DevMailRecord[]> {
-  if (recipients.length === 0) return [];
+/** Newest first: mail addressed to `email`, and mail that `userId`'s actions caused. */
+export async function listDevMailForUser({ email, userId }: { email: string; userId: string }, db: Knex = getDb()): Promise<DevMailRecord[]> {
   const rows = await db("dev_mailbox")
-    .whereRaw("recipients && ?::text[]", [recipients])
+    .where((q) => q.whereRaw("? = any(recipients)", [email]).orWhere("caused_by", userId))
     .orderBy("id", "desc")
     .limit(DEV_INBOX_LIMIT)
     .select<{ id: string; recipients: string[]; subject: string; text_body: string; received_at: Date }[]>("id", "recipients", "subject", "text_body", "received_at");

@@ -68,12 +68,6 @@ export async function listOpenInvitesByWorkspace(workspaceId: string, db: Knex =
   return rows.map(toInvite);
 }
 
-/** Any invite ever sent by the workspace, for the development inbox. */
-export async function listInvitedEmailsByWorkspace(workspaceId: string, db: Knex = getDb()): Promise<string[]> {
-  const rows = await db("invite").where({ workspace_id: workspaceId }).distinct<{ email: string }[]>("email");
-  return rows.map((r) => r.email);
-}
-
 export async function getInviteByTokenHash(tokenHash: string, db: Knex = getDb()): Promise<InviteRecord | null> {
   const row = await db("invite as i").join("workspace as w", "w.id", "i.workspace_id").where("i.token_hash", tokenHash).first<InviteRow | undefined>(columns);
   return row ? toInvite(row) : null;

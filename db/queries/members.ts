@@ -2,6 +2,8 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import type { Role } from "@/app/_lib/roles";
+import { insertActivity } from "./activity";
+import { revokeApiTokensOfMember } from "./api-tokens";
 
 // The members of one workspace. Every function takes the workspace id, so a
 // user of another workspace is simply not found (the caller answers 404).
@@ -40,27 +42,38 @@ export async function getMemberByUser({ workspaceId, userId }: { workspaceId: st
  */
 async function withAdminGuard(
   { workspaceId, userId, keepsAdmin }: { workspaceId: string; userId: string; keepsAdmin: boolean },
-  change: (trx: Knex.Transaction) => Promise<void>,
+  change: (trx: Knex.Transaction, target: { role: Role; displayName: string }) => Promise<void>,
 ): Promise<MemberChange> {
   return getDb().transaction(async (trx) => {
     const admins = await trx("membership").where({ workspace_id: workspaceId, role: "admin" }).forUpdate().select<{ user_id: string }[]>("user_id");
-    const target = await trx("membership").where({ workspace_id: workspaceId, user_id: userId }).forUpdate().first<{ role: Role } | undefined>("role");
+    const target = await trx("membership as m")
+      .join("auth_user as u", "u.id", "m.user_id")
+      .where({ "m.workspace_id": workspaceId, "m.user_id": userId })
+      .forUpdate("m")
+      .first<{ role: Role; display_name: string } | undefined>("m.role", "u.display_name");
     if (!target) return "not_found";
     const isAdmin = admins.some((a) => a.user_id === userId);
     if (isAdmin && !keepsAdmin && admins.length <= 1) return "last_admin";
-    await change(trx);
+    await change(trx, { role: target.role, displayName: target.display_name });
     return "done";
   });
 }
 
-export async function updateMemberRoleByUser({ workspaceId, userId, role }: { workspaceId: string; userId: string; role: Role }): Promise<MemberChange> {
-  return withAdminGuard({ workspaceId, userId, keepsAdmin: role === "admin" }, async (trx) => {
+/** Changes the role and logs it (with the member's name as it is now), in one transaction. */
+export async function updateMemberRoleByUser({ workspaceId, userId, role, actor }: { workspaceId: string; userId: string; role: Role; actor: string }): Promise<MemberChange> {
+  return withAdminGuard({ workspaceId, userId, keepsAdmin: role === "admin" }, async (trx, target) => {
+    if (target.role === role) return;
     await trx("membership").where({ workspace_id: workspaceId, user_id: userId }).update({ role });
+    const detail = { member: { id: userId, displayName: target.displayName }, from: target.role, to: role };
+    await insertActivity({ workspaceId, projectId: null, actor, action: "member.role_changed", detail }, trx);
   });
 }
 
-export async function deleteMemberByUser({ workspaceId, userId }: { workspaceId: string; userId: string }): Promise<MemberChange> {
-  return withAdminGuard({ workspaceId, userId, keepsAdmin: false }, async (trx) => {
+/** Removes the member, revokes their API tokens in this workspace for good, and logs it, in one transaction. */
+export async function deleteMemberByUser({ workspaceId, userId, actor }: { workspaceId: string; userId: string; actor: string }): Promise<MemberChange> {
+  return withAdminGuard({ workspaceId, userId, keepsAdmin: false }, async (trx, target) => {
     await trx("membership").where({ workspace_id: workspaceId, user_id: userId }).delete();
+    await revokeApiTokensOfMember({ workspaceId, userId }, trx);
+    await insertActivity({ workspaceId, projectId: null, actor, action: "member.removed", detail: { member: { id: userId, displayName: target.displayName }, role: target.role } }, trx);
   });
 }

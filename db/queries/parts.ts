@@ -169,10 +169,10 @@ export async function updatePartById({ workspaceId, id, values }: { workspaceId:
   return getPartById({ workspaceId, id }, db);
 }
 
-/** Deletes the part; returns its datasheet file id (the caller removes the file) or null when not found. */
-export async function deletePartById({ workspaceId, id }: { workspaceId: string; id: string }, db: Knex = getDb()): Promise<{ datasheetFileId: string | null } | null> {
-  const rows = await db("part").where({ workspace_id: workspaceId, id }).delete().returning<{ datasheet_file_id: string | null }[]>(["datasheet_file_id"]);
-  return rows.length ? { datasheetFileId: rows[0].datasheet_file_id } : null;
+/** Deletes the part; returns its datasheet file id (the caller removes the file) and what it was, or null when not found. */
+export async function deletePartById({ workspaceId, id }: { workspaceId: string; id: string }, db: Knex = getDb()): Promise<{ datasheetFileId: string | null; mpn: string; manufacturer: string } | null> {
+  const rows = await db("part").where({ workspace_id: workspaceId, id }).delete().returning<{ datasheet_file_id: string | null; mpn: string; manufacturer: string }[]>(["datasheet_file_id", "mpn", "manufacturer"]);
+  return rows.length ? { datasheetFileId: rows[0].datasheet_file_id, mpn: rows[0].mpn, manufacturer: rows[0].manufacturer } : null;
 }
 
 export async function setPartDatasheetById({ workspaceId, id, fileId }: { workspaceId: string; id: string; fileId: string | null }, db: Knex = getDb()): Promise<boolean> {

@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
+import { insertActivity } from "./activity";
 import type { PartValues } from "@/app/_lib/partValues";
 import { newPartId } from "./parts";
 
@@ -59,6 +60,7 @@ export async function upsertPartsByMpn(
         });
     }
     const updated = rows.filter((r) => existing.has(r.mpn)).length;
+    await insertActivity({ workspaceId, projectId: null, actor: userId, action: "parts.imported", detail: { created: rows.length - updated, updated } }, trx);
     return { created: rows.length - updated, updated };
   });
 }

@@ -10,8 +10,8 @@
 //    a closed loop of N connections on one core waits at least N × that
 //    time on average.
 import autocannon from "autocannon";
-import crypto from "node:crypto";
 import { demoOptions } from "../../models/demo";
+import { signUp } from "../load/common";
 import { parseDesign } from "../../models/schema";
 import { evaluateDesign } from "../../models/evaluate";
 import { assertFinite } from "../../app/_lib/finite";
@@ -19,18 +19,6 @@ import { assertFinite } from "../../app/_lib/finite";
 const ORIGIN = process.env.APP_ORIGIN ?? "http://127.0.0.1:3200";
 const TARGET_P95_MS = 25;
 const DURATION_S = 10;
-
-async function signUp(): Promise<string> {
-  const email = `bench.${crypto.randomBytes(4).toString("hex")}@example.test`;
-  const res = await fetch(`${ORIGIN}/api/v1/auth/sign-up`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin: ORIGIN },
-    body: JSON.stringify({ displayName: "Bench Runner", email, password: crypto.randomBytes(12).toString("hex"), workspaceName: "Bench" }),
-  });
-  if (res.status !== 201) throw new Error(`sign-up for the bench failed: ${res.status} ${await res.text()}`);
-  const cookie = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
-  return cookie;
-}
 
 /** Runs autocannon and keeps every response time, so p95 is exact. */
 function run(opts: autocannon.Options): Promise<{ result: autocannon.Result; times: number[] }> {
@@ -50,7 +38,7 @@ function percentile(sorted: number[], p: number): number {
 }
 
 export async function runApiBench(): Promise<{ ok: boolean; lines: string[] }> {
-  const cookie = await signUp();
+  const { cookie } = await signUp("bench");
   const body = JSON.stringify({ design: demoOptions[0].input });
   // warm-up so the first compile of the route and the JIT are not measured
   await run({ url: `${ORIGIN}/api/v1/evaluate`, method: "POST", connections: 4, amount: 200, headers: { cookie, origin: ORIGIN, "content-type": "application/json" }, body });

@@ -15,7 +15,11 @@ export interface Account {
   workspaceId: string;
 }
 
-/** A new account with its own workspace (admin); the sign-up answer carries the session cookie. */
+/**
+ * A new account with its own workspace (admin): the sign-up request, then
+ * its link, read from the fake SMTP server's dev_mailbox table as the
+ * recipient would read it; the confirmation's answer carries the session cookie.
+ */
 export async function signUp(label: string): Promise<Account> {
   const email = `${label}.${crypto.randomBytes(4).toString("hex")}@example.test`;
   const res = await fetch(`${ORIGIN}/api/v1/auth/sign-up`, {
@@ -23,9 +27,31 @@ export async function signUp(label: string): Promise<Account> {
     headers: { "content-type": "application/json", origin: ORIGIN },
     body: JSON.stringify({ displayName: `Load ${label}`, email, password: crypto.randomBytes(12).toString("hex"), workspaceName: `Load ${label}` }),
   });
-  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${await res.text()}`);
-  const body = (await res.json()) as { workspace: { id: string } };
-  return { cookie: res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; "), email, workspaceId: body.workspace.id };
+  if (res.status !== 202) throw new Error(`sign-up failed: ${res.status} ${await res.text()}`);
+  const token = await signUpToken(email);
+  const done = await fetch(`${ORIGIN}/api/v1/auth/sign-up/confirm`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: ORIGIN },
+    body: JSON.stringify({ token }),
+  });
+  if (done.status !== 201) throw new Error(`sign-up confirmation failed: ${done.status} ${await done.text()}`);
+  const body = (await done.json()) as { workspace: { id: string } };
+  return { cookie: done.headers.getSetCookie().map((c) => c.split(";")[0]).join("; "), email, workspaceId: body.workspace.id };
+}
+
+async function signUpToken(email: string): Promise<string> {
+  const db: Knex = knexFactory({ client: "pg", connection: process.env.DATABASE_URL, pool: { min: 0, max: 1 } });
+  try {
+    for (const until = Date.now() + 15_000; Date.now() < until; ) {
+      const row = await db("dev_mailbox").whereRaw("? = any(recipients)", [email]).orderBy("id", "desc").first<{ text_body: string } | undefined>("text_body");
+      const m = row && /\/sign-up\/confirm#token=([A-Za-z0-9_-]+)/.exec(row.text_body);
+      if (m) return m[1];
+      await new Promise((r) => setTimeout(r, 100));
+    }
+    throw new Error(`no sign-up link for ${email} in the dev mailbox`);
+  } finally {
+    await db.destroy();
+  }
 }
 
 export async function api<T>(account: Account, method: string, path: string, body?: unknown): Promise<{ status: number; json: T }> {

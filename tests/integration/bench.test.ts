@@ -2,6 +2,7 @@
 // row is wrong; a good file is stored (rows + original in S3); the API
 // compares each reading with the model; a reviewer's accepted fit becomes a
 // new revision.
+import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeTestDb, createWorkspaceWithRoles, testDb } from "./support/db";
 import { createProjectWithOption, signedInClient } from "./support/projects";
@@ -85,7 +86,9 @@ describe("bench upload: a good file", () => {
     expect(rows[3].note).toBe('tab, "K" type');
     const file = await viewer.get(`/api/v1/options/${optionId}/bench/${runId}/file`);
     expect(file.status).toBe(200);
-    expect(file.text).toBe(csv);
+    // the same rows and values as uploaded, every cell quoted by the shared CSV writer
+    expect(Papa.parse(file.text, { skipEmptyLines: true }).data).toEqual(Papa.parse(csv, { skipEmptyLines: true }).data);
+    expect(file.text.split("\r\n")[0]).toBe(BENCH_HEADER.split(",").map((c) => `"${c}"`).join(","));
     expect((await adminB.get(`/api/v1/options/${optionId}/bench/${runId}/file`)).status).toBe(404);
   });
 

@@ -25,7 +25,7 @@ const TOTAL_RUNS = Number(process.env.FUZZ_RUNS ?? 300);
 // FUZZ_SEED=random to explore new cases. The seed is in every failure message:
 // FUZZ_SEED=<it> npm run fuzz repeats the run.
 const FUZZ_SEED = process.env.FUZZ_SEED === "random" ? Math.floor(Math.random() * 2 ** 31) : Number(process.env.FUZZ_SEED ?? 20261201);
-/** Tables a refused request must not add rows to (auth_throttle and dev_mailbox may change on refusals by design). */
+/** Tables a refused request must not add rows to (auth_guard, dev_mailbox and activity_log may change on refusals by design). */
 const TABLES = ["auth_user", "workspace", "membership", "user_session", "invite", "password_reset", "project", "design_option", "option_revision", "option_choice", "part", "stored_file"];
 const TOUCHED = ["project", "design_option", "part"]; // tables with updated_at: a refused PATCH must not touch a row
 
@@ -244,6 +244,10 @@ function formOf(jsonText: string): string {
   }
   if (!obj || typeof obj !== "object" || Array.isArray(obj)) return String(jsonText);
   const form = new URLSearchParams();
-  for (const [k, v] of Object.entries(obj)) form.append(k, typeof v === "string" ? v : JSON.stringify(v) ?? "");
+  try {
+    for (const [k, v] of Object.entries(obj)) form.append(k, typeof v === "string" ? v : JSON.stringify(v) ?? "");
+  } catch {
+    return jsonText; // too deep for this process's JSON.stringify: send the text as it is
+  }
   return form.toString();
 }

@@ -21,7 +21,7 @@ import { batchSeed, mergeMonteCarlo } from "@/app/_lib/jobs/monteCarloMerge";
 
 const ROOT = path.resolve(__dirname, "../..");
 const SCHEMA = `pgboss_restart_${crypto.randomBytes(3).toString("hex")}`;
-let viewer: Client, adminB: Client;
+let reviewer: Client, adminB: Client;
 let wsA: string, userId: string, optionId: string;
 const children: ChildProcess[] = [];
 
@@ -38,12 +38,12 @@ async function until<T>(what: string, probe: () => Promise<T | null | undefined 
 const jobRow = (id: string) => testDb()("job_result").where({ id }).first();
 
 beforeAll(async () => {
-  const a = await createWorkspaceWithRoles("Jobs A", ["designer", "viewer"]);
+  const a = await createWorkspaceWithRoles("Jobs A", ["designer", "reviewer"]); // starting a job needs job:start (a viewer may not)
   const b = await createWorkspaceWithRoles("Jobs B", ["admin"]);
   wsA = a.workspaceId;
-  userId = a.users.viewer.id;
+  userId = a.users.reviewer.id;
   const designer = await signedInClient(a.users.designer.email);
-  [viewer, adminB] = await Promise.all([signedInClient(a.users.viewer.email), signedInClient(b.users.admin.email)]);
+  [reviewer, adminB] = await Promise.all([signedInClient(a.users.reviewer.email), signedInClient(b.users.admin.email)]);
   optionId = (await createProjectWithOption(designer)).optionId;
 });
 
@@ -67,11 +67,11 @@ async function pollJob(client: Client, id: string): Promise<any> {
 describe("jobs through the app server", () => {
   it("a 300 × 300 sweep (beyond the API's 250 × 250) completes with the model's numbers; another workspace gets 404", async () => {
     const spec = { part: "controller", x: { axis: "fsw" as const, from: 1e5, to: 1e6, steps: 300, scale: "log" as const }, y: { axis: "qgScale" as const, from: 0.5, to: 2, steps: 300 } };
-    const r = await viewer.post("/api/v1/jobs", { kind: "sweep", payload: { optionId, revision: 1, spec } });
+    const r = await reviewer.post("/api/v1/jobs", { kind: "sweep", payload: { optionId, revision: 1, spec } });
     expect(r.status).toBe(202);
     const id = r.json<{ job: { id: string; status: string } }>().job.id;
     expect((await adminB.get(`/api/v1/jobs/${id}`)).status).toBe(404);
-    const job = await pollJob(viewer, id);
+    const job = await pollJob(reviewer, id);
     expect(job.progress).toBe(1);
     expect(job.result.complete).toBe(true);
     expect(job.result.z).toHaveLength(300);
@@ -82,16 +82,16 @@ describe("jobs through the app server", () => {
 
   it("refuses a spec naming an unknown part at once (400), and another workspace's option (404)", async () => {
     const spec = { part: "Q9", x: { axis: "fsw", from: 1e5, to: 1e6, steps: 10 }, y: { axis: "qgScale", from: 0.5, to: 2, steps: 10 } };
-    expect((await viewer.post("/api/v1/jobs", { kind: "sweep", payload: { optionId, revision: 1, spec } })).status).toBe(400);
+    expect((await reviewer.post("/api/v1/jobs", { kind: "sweep", payload: { optionId, revision: 1, spec } })).status).toBe(400);
     expect((await adminB.post("/api/v1/jobs", { kind: "monte-carlo", payload: { optionId, revision: 1, samples: 10, seed: 1 } })).status).toBe(404);
   });
 
   it("a report job renders a PDF stored in object storage, downloadable by the same workspace only", async () => {
-    const r = await viewer.post("/api/v1/jobs", { kind: "report", payload: { optionId, revision: 1, heatmapSteps: 30 } });
+    const r = await reviewer.post("/api/v1/jobs", { kind: "report", payload: { optionId, revision: 1, heatmapSteps: 30 } });
     expect(r.status).toBe(202);
-    const job = await pollJob(viewer, r.json<{ job: { id: string } }>().job.id);
+    const job = await pollJob(reviewer, r.json<{ job: { id: string } }>().job.id);
     expect(job.fileUrl).toBe(`/api/v1/jobs/${job.id}/file`);
-    const down = await fetch(new URL(job.fileUrl, ORIGIN), { headers: { cookie: viewer.cookieHeader() } });
+    const down = await fetch(new URL(job.fileUrl, ORIGIN), { headers: { cookie: reviewer.cookieHeader() } });
     expect(down.status).toBe(200);
     expect(Buffer.from(await down.arrayBuffer()).subarray(0, 5).toString()).toBe("%PDF-");
     expect((await adminB.get(job.fileUrl)).status).toBe(404);

@@ -8,7 +8,7 @@ import crypto from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ROLES, type Role } from "@/app/_lib/roles";
 import { Client, locationPath, type Reply } from "./support/http";
-import { TEST_PASSWORD, addMembership, closeTestDb, createUser, createWorkspaceWithRoles, testDb, uniqueEmail } from "./support/db";
+import { TEST_PASSWORD, addMembership, clearAddressThrottle, closeTestDb, createUser, createWorkspaceWithRoles, testDb, uniqueEmail } from "./support/db";
 import { CALLERS, MATRIX, type ActionEntry, type CallEntry, type Caller, type Fixtures, type Outcome, type PendingEntry } from "./route-matrix";
 
 const APP_DIR = path.resolve(__dirname, "../../app");
@@ -120,6 +120,7 @@ async function freshClient(caller: Caller): Promise<Client> {
 }
 
 beforeAll(async () => {
+  await clearAddressThrottle(); // every caller signs up and in from loopback
   const a = await createWorkspaceWithRoles("Matrix A", ROLES);
   const b = await createWorkspaceWithRoles("Matrix B", ["admin"]);
   for (const role of ROLES) credentials.set(role, a.users[role].email);

@@ -71,7 +71,7 @@ export const benchRoutes = ({ api, page }: Helpers): MatrixEntry[] => [
     key: "POST /api/v1/jobs",
     params: async (fx) => { resolvedOption.set(fx, (await sharedRun(fx)).optionId); return {}; },
     body: (fx) => sweepBody(resolvedOption.get(fx)!),
-    expect: api("read", 202, 404),
+    expect: api("job:start", 202, 404),
   },
   { key: "GET /api/v1/jobs/[jobId]", params: async (fx) => ({ jobId: await completedJob(fx) }), expect: api("read", 200, 404) },
   { key: "GET /api/v1/jobs/[jobId]/file", params: async (fx) => ({ jobId: await completedJob(fx) }), expect: api("read", 200, 404) },

@@ -6,7 +6,7 @@
 import type { Caller, Expectation, Fixtures, MatrixEntry, Outcome } from "./route-matrix";
 import type { Permission } from "@/app/_lib/roles";
 import type { Client } from "./support/http";
-import { addMembership, createUser } from "./support/db";
+import { TEST_PASSWORD, addMembership, createUser } from "./support/db";
 import { createProject, createProjectWithOption, signedInClient } from "./support/projects";
 
 interface Helpers {
@@ -38,7 +38,7 @@ async function submittedOption(fx: Fixtures): Promise<{ optionId: string }> {
 
 /** A fresh token of A's admin: only the admin may revoke it; anyone else finds nothing. */
 async function adminToken(fx: Fixtures): Promise<{ tokenId: string }> {
-  const r = await fx.adminOfA.post("/api/v1/tokens", { name: "matrix token" });
+  const r = await fx.adminOfA.post("/api/v1/tokens", { name: "matrix token", expiresInDays: 7, password: TEST_PASSWORD });
   if (r.status !== 201) throw new Error(`token fixture: ${r.status} ${r.text}`);
   return { tokenId: r.json<{ token: { id: string } }>().token.id };
 }
@@ -84,7 +84,7 @@ export const reviewRoutes = ({ api, page }: Helpers): MatrixEntry[] => [
 
   // ---- API tokens (session only) ----
   { key: "GET /api/v1/tokens", expect: api("token:own", 200) },
-  { key: "POST /api/v1/tokens", body: () => ({ name: "matrix token", expiresInDays: 7 }), expect: api("token:own", 201) },
+  { key: "POST /api/v1/tokens", body: () => ({ name: "matrix token", expiresInDays: 7, password: TEST_PASSWORD }), expect: api("token:own", 201) },
   { key: "DELETE /api/v1/tokens/[tokenId]", params: adminToken, expect: ownTokenOnly },
 
   // ---- server actions, each through the route with the same flow ----

@@ -4,7 +4,7 @@
 // cannot manage tokens itself; revoked, expired, unknown or malformed -> 401;
 // pages stay session-only.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeTestDb, createWorkspaceWithRoles, testDb, type TestUser } from "./support/db";
+import { TEST_PASSWORD, closeTestDb, createWorkspaceWithRoles, testDb, type TestUser } from "./support/db";
 import { Client, locationPath } from "./support/http";
 import { projectBody, signedInClient } from "./support/projects";
 
@@ -19,7 +19,7 @@ beforeAll(async () => {
 afterAll(closeTestDb);
 
 async function createToken(client: Client, body: Record<string, unknown> = { name: "CI job" }): Promise<{ id: string; secret: string }> {
-  const r = await client.post("/api/v1/tokens", body);
+  const r = await client.post("/api/v1/tokens", { expiresInDays: 30, password: TEST_PASSWORD, ...body });
   expect(r.status, r.text).toBe(201);
   const j = r.json<{ token: { id: string }; secret: string }>();
   return { id: j.token.id, secret: j.secret };
@@ -79,7 +79,7 @@ describe("a live token", () => {
   it("cannot list, mint or revoke tokens, nor switch workspace (session only)", async () => {
     const t = await createToken(session.admin);
     expect((await bearer(t.secret, "GET", "/api/v1/tokens")).status).toBe(403);
-    expect((await bearer(t.secret, "POST", "/api/v1/tokens", { json: { name: "child" } })).status).toBe(403);
+    expect((await bearer(t.secret, "POST", "/api/v1/tokens", { json: { name: "child", expiresInDays: 7, password: TEST_PASSWORD } })).status).toBe(403);
     expect((await bearer(t.secret, "DELETE", `/api/v1/tokens/${t.id}`)).status).toBe(403);
   });
 

@@ -4,7 +4,7 @@ import { forgotPasswordSchema } from "@/app/_lib/accounts/schemas";
 import { RESET_REQUESTED_MESSAGE, requestPasswordReset } from "@/app/_lib/accounts/password-reset";
 
 // Same flow as POST /api/v1/auth/password/forgot; the same answer for every address.
-export const forgotPasswordAction = publicAction({ schema: forgotPasswordSchema }, async (input) => {
-  await requestPasswordReset(input.email);
+export const forgotPasswordAction = publicAction({ schema: forgotPasswordSchema }, async (input, { member }) => {
+  requestPasswordReset(input.email, member?.user.id ?? null);
   return { ok: true, message: RESET_REQUESTED_MESSAGE };
 });

@@ -16,6 +16,8 @@ export function SignUpForm() {
     onChange: (e: React.ChangeEvent<HTMLInputElement>) => setValues((v) => ({ ...v, [name]: e.target.value })),
     error: fieldError(state, name),
   });
+  // the same answer for every address: the rest happens through the mailed link
+  if (state.ok && state.message) return <StateMessage state={state} />;
   return (
     <form action={formAction} className="flex flex-col gap-4" noValidate>
       <StateMessage state={state} />
@@ -32,7 +34,7 @@ export function SignUpForm() {
         error={fieldError(state, "password")}
       />
       <TextInput label="Workspace name" hint="Your team or company; you can invite colleagues next." required {...bind("workspaceName")} />
-      <SubmitButton pendingLabel="Creating…">Create account and workspace</SubmitButton>
+      <SubmitButton pendingLabel="Sending…">Create account and workspace</SubmitButton>
     </form>
   );
 }

@@ -1,11 +1,17 @@
 "use server";
 import { redirect } from "next/navigation";
 import { publicAction } from "@/app/_lib/access";
-import { signUpSchema } from "@/app/_lib/accounts/schemas";
-import { signUp } from "@/app/_lib/accounts/sign-up";
+import { confirmSignUpSchema, signUpSchema } from "@/app/_lib/accounts/schemas";
+import { SIGN_UP_REQUESTED_MESSAGE, confirmSignUp, requestSignUp } from "@/app/_lib/accounts/sign-up";
+import { clientAddress } from "@/app/_lib/client-address";
 
-// Same flow as POST /api/v1/auth/sign-up.
-export const signUpAction = publicAction({ schema: signUpSchema }, async (input) => {
-  await signUp(input);
+// Same flows as POST /api/v1/auth/sign-up and /api/v1/auth/sign-up/confirm.
+export const signUpAction = publicAction({ schema: signUpSchema }, async (input, { member, headers }) => {
+  await requestSignUp(input, { address: clientAddress(headers), causedBy: member?.user.id ?? null });
+  return { ok: true, message: SIGN_UP_REQUESTED_MESSAGE };
+});
+
+export const confirmSignUpAction = publicAction({ schema: confirmSignUpSchema }, async (input) => {
+  await confirmSignUp(input.token);
   redirect("/home");
 });

@@ -20,8 +20,9 @@ const ABILITIES: Record<Permission, string> = {
   "derating:write": "Set derating rules",
   "option:choose": "Choose the design option to build",
   "bench:write": "Record bench measurements",
+  "job:start": "Start long sweeps, Monte Carlo runs and reports in the background",
   "token:own": "Create personal API tokens",
-  "dev:inbox": "Read the development mail inbox",
+  "dev:inbox": "Read your own mail in the development inbox (local stacks only)",
 };
 
 export default async function HomePage() {

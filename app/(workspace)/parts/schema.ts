@@ -84,7 +84,8 @@ export interface PartListFilter {
   pageSize: number;
 }
 
-const opt = z.string().max(100).optional().transform((s) => (s && s.trim() ? s.trim() : undefined));
+// no NUL: PostgreSQL text cannot hold one (route() and proxy.ts refuse it first; this keeps a page that bypassed them from failing)
+const opt = z.string().max(100).refine((s) => !s.includes("\u0000"), "contains a NUL character").optional().transform((s) => (s && s.trim() ? s.trim() : undefined));
 
 /** Search params of /parts and GET /api/v1/parts (and the export). */
 export const partListQuerySchema = z

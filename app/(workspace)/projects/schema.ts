@@ -124,7 +124,8 @@ export type ProjectSort = (typeof PROJECT_SORTS)[number];
 export const PROJECT_PAGE_SIZES = [10, 20, 50, 100] as const;
 
 export const projectListQuerySchema = z.object({
-  q: z.preprocess(blankToUndefined, z.string().trim().max(100).optional()),
+  // no NUL: PostgreSQL text cannot hold one (route() and proxy.ts refuse it first; this keeps a page that bypassed them from failing)
+  q: z.preprocess(blankToUndefined, z.string().trim().max(100).refine((v) => !v.includes("\u0000"), "contains a NUL character").optional()),
   status: z.preprocess(blankToUndefined, z.enum(PROJECT_STATUSES).optional()),
   topology: z.preprocess(blankToUndefined, z.enum(TOPOLOGIES).optional()),
   sort: z.preprocess(blankToUndefined, z.enum(PROJECT_SORTS).default("updated")),

@@ -1,16 +1,20 @@
 import "server-only";
 import type { Member } from "../member";
-import { listMembersByWorkspace } from "@/db/queries/members";
-import { listInvitedEmailsByWorkspace } from "@/db/queries/invites";
-import { listDevMailByRecipients, type DevMailRecord } from "@/db/queries/dev-mailbox";
+import { listDevMailForUser, type DevMailRecord } from "@/db/queries/dev-mailbox";
 
-/** The development inbox exists only where HEATSPLIT_DEV_INBOX=1 (local stacks). */
-export function devInboxEnabled(): boolean {
-  return process.env.HEATSPLIT_DEV_INBOX === "1";
-}
+export { devInboxEnabled } from "../mail";
 
-/** Mail to the admin's workspace: its members and every address it invited. */
-export async function listDevMailForWorkspace(member: Member): Promise<DevMailRecord[]> {
-  const [members, invited] = await Promise.all([listMembersByWorkspace(member.workspace.id), listInvitedEmailsByWorkspace(member.workspace.id)]);
-  return listDevMailByRecipients([...new Set([...members.map((m) => m.email), ...invited])]);
+export const LINK_WITHHELD = "[link withheld: only the recipient may follow it]";
+const URL_PATTERN = /https?:\/\/[^\s<>"']+/g;
+
+/**
+ * The member's own mail: messages addressed to them, and messages their own
+ * actions caused (an invitation they sent). In the latter every link is
+ * withheld: a link in someone else's mail (reset, invitation, sign-up) lets
+ * its reader act as that person.
+ */
+export async function listDevMailForMember(member: Member): Promise<DevMailRecord[]> {
+  const email = member.user.email.toLowerCase();
+  const mail = await listDevMailForUser({ email, userId: member.user.id });
+  return mail.map((m) => (m.recipients.includes(email) ? m : { ...m, textBody: m.textBody.replace(URL_PATTERN, LINK_WITHHELD) }));
 }

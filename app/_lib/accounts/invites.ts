@@ -34,6 +34,7 @@ export async function createInvite(member: Member, { email, role }: InviteInput)
   const link = appLink("/invite", { token });
   await sendMail({
     to: email,
+    causedBy: member.user.id,
     subject: `${member.user.displayName} invited you to ${member.workspace.name} on Heatsplit`,
     text: `Hello,\n\n${member.user.displayName} invited you to join the workspace "${member.workspace.name}" on Heatsplit as ${role}.\nAccept the invitation here (the link works for ${INVITE_TTL_DAYS} days):\n\n${link}\n\nIf you did not expect this, ignore this message.\n`,
   });

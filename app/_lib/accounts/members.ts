@@ -12,9 +12,9 @@ function check(result: MemberChange): void {
 }
 
 export async function changeMemberRole(member: Member, { userId, role }: { userId: string; role: Role }): Promise<void> {
-  check(await updateMemberRoleByUser({ workspaceId: member.workspace.id, userId, role }));
+  check(await updateMemberRoleByUser({ workspaceId: member.workspace.id, userId, role, actor: member.user.id }));
 }
 
 export async function removeMember(member: Member, { userId }: { userId: string }): Promise<void> {
-  check(await deleteMemberByUser({ workspaceId: member.workspace.id, userId }));
+  check(await deleteMemberByUser({ workspaceId: member.workspace.id, userId, actor: member.user.id }));
 }

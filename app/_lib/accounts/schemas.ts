@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { ROLES } from "../roles";
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from "../password-policy";
+import { nextPathProblem } from "../paths";
 
 // Input schemas of the account flows. The same schema validates the form
 // (server action, FormData strings) and the JSON route, so both give the
@@ -21,11 +22,30 @@ const enteredPassword = z
   .min(1, { error: "Enter your password." })
   .max(PASSWORD_MAX_LENGTH, { error: "E-mail or password is wrong." });
 
-const displayName = z
-  .string({ error: "Enter your name." })
-  .trim()
-  .min(1, { error: "Enter your name." })
-  .max(100, { error: "Use at most 100 characters." });
+// Names end up in mail subjects, page titles and the activity log: no line
+// breaks, control characters, or the bidirectional overrides that make text
+// read differently from what it is.
+const UNPRINTABLE = /[\p{Cc}\u2028\u2029\u200e\u200f\u202a-\u202e\u2066-\u2069]/u;
+const NAME_CHARACTERS = "Use letters, digits, spaces and punctuation only (no line breaks or control characters).";
+
+function nameField(missing: string) {
+  return z
+    .string({ error: missing })
+    .refine((v) => !UNPRINTABLE.test(v), { error: NAME_CHARACTERS })
+    .transform((v) => v.trim())
+    .pipe(z.string().min(1, { error: missing }).max(100, { error: "Use at most 100 characters." }));
+}
+
+const displayName = nameField("Enter your name.");
+
+/** Where to go after signing in: printable ASCII only (a 400 otherwise); safeNextPath then keeps it on this origin. */
+const nextPathField = z
+  .string()
+  .max(500)
+  .superRefine((v, ctx) => {
+    const problem = nextPathProblem(v);
+    if (problem) ctx.addIssue({ code: "custom", message: problem });
+  });
 
 const token = z.string({ error: "This link is incomplete." }).trim().min(20, { error: "This link is incomplete." }).max(200, { error: "This link is not valid." });
 
@@ -33,19 +53,17 @@ export const signUpSchema = z.object({
   displayName,
   email: emailField,
   password: newPasswordField,
-  workspaceName: z
-    .string({ error: "Name your workspace." })
-    .trim()
-    .min(1, { error: "Name your workspace." })
-    .max(100, { error: "Use at most 100 characters." }),
+  workspaceName: nameField("Name your workspace."),
 });
 export type SignUpInput = z.infer<typeof signUpSchema>;
 
 export const signInSchema = z.object({
   email: emailField,
   password: enteredPassword,
-  next: z.string().max(500).optional(),
+  next: nextPathField.optional(),
 });
+
+export const confirmSignUpSchema = z.object({ token });
 export type SignInInput = z.infer<typeof signInSchema>;
 
 export const forgotPasswordSchema = z.object({ email: emailField });

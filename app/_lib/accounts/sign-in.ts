@@ -3,25 +3,23 @@ import { cookies } from "next/headers";
 import { AppError } from "../errors";
 import { getLucia, SESSION_COOKIE, createSignedInSession, clearSessionCookie } from "../auth";
 import { verifyPassword } from "../passwords";
-import { assertSignInAllowed, recordSignInFailure, recordSignInSuccess } from "../throttle";
+import { beginPasswordAttempt } from "../throttle";
 import { getCredentialsByEmail, type UserRecord } from "@/db/queries/accounts";
 import { listMembershipsByUser } from "@/db/queries/workspaces";
 
 export const INVALID_CREDENTIALS = "E-mail or password is wrong.";
 
 /**
- * Checks a password under the sign-in throttle. Same answer (and about the
- * same time) for an unknown e-mail and a wrong password.
+ * Checks a password under the sign-in throttle, which counts the attempt
+ * before the check (so a parallel burst is checked a few times only). Same
+ * answer (and about the same time) for an unknown e-mail and a wrong password.
  */
 export async function checkPassword({ email, password, address }: { email: string; password: string; address: string }): Promise<UserRecord> {
-  await assertSignInAllowed({ email, address });
+  const attempt = await beginPasswordAttempt({ email, address });
   const creds = await getCredentialsByEmail(email);
   const ok = await verifyPassword(creds?.passwordHash ?? null, password);
-  if (!creds || !ok) {
-    await recordSignInFailure({ email, address });
-    throw new AppError("unauthenticated", INVALID_CREDENTIALS);
-  }
-  await recordSignInSuccess({ email });
+  if (!creds || !ok) throw new AppError("unauthenticated", INVALID_CREDENTIALS);
+  await attempt.succeeded();
   return creds.user;
 }
 

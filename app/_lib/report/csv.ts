@@ -1,13 +1,15 @@
-import Papa from "papaparse";
 import { LOSS_MECHANISMS } from "@/models/losses";
 import type { ReportData } from "./data";
+import { writeCsv } from "../csv";
 
 // Every figure of the budget as rows: one per corner × part × mechanism
 // (loss), one total per corner × part, and for junction parts Tj, the
 // derated limit, Tj(max) and the margin; one total per corner. Units are in
 // the header; numbers are SI and unrounded (JavaScript's shortest
 // round-trip form) so a spreadsheet recomputes what the app shows. The first
-// line is a "#" comment with the caution (papaparse: comments "#").
+// line is one cell starting "#" with the caution; every cell goes through
+// the shared writer (app/_lib/csv.ts), so an option or part name cannot
+// split a line or plant a formula.
 export const LOSS_COLUMN = "loss [W]";
 export const TEMPERATURE_COLUMN = "temperature [°C]";
 export const DIFFERENCE_COLUMN = "difference [K]";
@@ -31,5 +33,5 @@ export function budgetCsv(d: ReportData): string {
     rows.push([c.cornerId, c.label, "", "", "corner_loss_total", "", c.totalLoss, "", "", ""]);
   }
   const preamble = `# Heatsplit budget: ${d.option.name.replace(/[\r\n]/g, " ")}, revision ${d.revision.revision}. Estimates, not measurements: confirm on the bench before release.`;
-  return `${preamble}\r\n${Papa.unparse({ fields: BUDGET_CSV_HEADER, data: rows }, { newline: "\r\n", escapeFormulae: true })}\r\n`;
+  return writeCsv([[preamble], BUDGET_CSV_HEADER, ...rows]);
 }

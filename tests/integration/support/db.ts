@@ -96,7 +96,11 @@ export function linkFrom(text: string, path: string): { url: string; token: stri
   return { url: m[0], token: m[1] };
 }
 
-/** Sign-in failures from the loopback address are shared by every test; tests that count them start and end clean. */
+/**
+ * Sign-in failures and sign-ups from the loopback addresses are shared by
+ * every test; tests that count them start and end clean. Clears the address,
+ * pair and sign-up counters (per-recipient mail caps stay).
+ */
 export async function clearAddressThrottle(): Promise<void> {
-  await testDb()("auth_throttle").where("bucket", "like", "address:%").delete();
+  await testDb()("auth_guard").whereRaw("not starts_with(bucket, 'mail:')").delete();
 }

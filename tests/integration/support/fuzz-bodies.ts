@@ -1,7 +1,7 @@
 // fast-check generators for the write-route fuzz test: malformed versions of
 // a valid JSON body (one field replaced with junk, removed, or an unknown
-// field added), whole bodies of random JSON, CSV imports with spoiled cells
-// and headers, and datasheet bytes. Each generated case says what it changed,
+// field added), whole bodies of random JSON, JSON nested 100 000 deep, lone
+// surrogates, CSV imports with spoiled cells and headers, and datasheet bytes. Each generated case says what it changed,
 // so a validation refusal can be checked for naming that field.
 import fc from "fast-check";
 
@@ -19,11 +19,22 @@ export const junkValue: fc.Arbitrary<unknown> = fc.oneof(
   fc.constantFrom(1e308, -1e308, 5e-324, -0, 2 ** 53 + 2, -1, 0, 1.5, 123456789),
   fc.constantFrom(true, false, null, [], {}, [null], { "": "" }, { __proto__: { polluted: 1 } }, { constructor: { prototype: { x: 1 } } }),
   fc.constantFrom("x".repeat(5_000), "x".repeat(70_000), "\u0000\u0001\u0002", "🔥".repeat(200), "<script>alert(1)</script>", "'; drop table project; --"),
+  // a lone surrogate (PostgreSQL refuses it), line breaks and controls (names, redirect targets), off-site paths
+  fc.constantFrom("\ud800", "rev \udfff B", "a\ud83d", "line\nbreak", "a\r\nSet-Cookie: x=1", "\t/evil.example", "/.//evil.example", "/€", "\u202egnp.exe", "=HYPERLINK(\"http://evil.example\")"),
   fc.string({ maxLength: 40 }),
   fc.integer(),
   fc.double(),
   fc.jsonValue({ maxDepth: 3 }),
 );
+
+/** JSON nested far deeper than any route accepts (once a stack overflow, unauthenticated): arrays, objects, or both. */
+export const deepJson: fc.Arbitrary<string> = fc
+  .record({ depth: fc.constantFrom(65, 1_000, 100_000), shape: fc.constantFrom("array", "object", "mixed") })
+  .map(({ depth, shape }) => {
+    if (shape === "array") return "[".repeat(depth) + "]".repeat(depth);
+    if (shape === "object") return '{"a":'.repeat(depth) + "1" + "}".repeat(depth);
+    return '{"a":['.repeat(depth / 2) + "1" + "]}".repeat(depth / 2);
+  });
 
 /** Dotted paths of every value inside `body` (objects and arrays), up to a depth. */
 export function pathsOf(body: unknown, prefix = "", depth = 0, out: string[] = []): string[] {
@@ -78,7 +89,7 @@ export function mutationOf(valid: unknown): fc.Arbitrary<Mutation> {
   const alternatives: fc.WeightedArbitrary<Mutation>[] = [
     { weight: 1, arbitrary: fc.record({ kind: fc.constant("addKey" as const), path: fc.constantFrom(...objectPaths), key: fc.constantFrom("extra", "__proto__x", "isAdmin", "workspaceId", "role") }) },
     { weight: 1, arbitrary: fc.record({ kind: fc.constant("whole" as const), value: fc.oneof(fc.jsonValue({ maxDepth: 4 }), junkValue) }) },
-    { weight: 1, arbitrary: fc.record({ kind: fc.constant("rawText" as const), text: fc.constantFrom("{", "{\"a\":", "not json", "[1,2,", "{\"x\": NaN}", "{\"x\": Infinity}", "\u0000", "{}}") }) },
+    { weight: 1, arbitrary: fc.record({ kind: fc.constant("rawText" as const), text: fc.oneof(fc.constantFrom("{", "{\"a\":", "not json", "[1,2,", "{\"x\": NaN}", "{\"x\": Infinity}", "\u0000", "{}}", "{\"a\":\"\\ud800\"}", "[\"\\udc00\"]"), deepJson) }) },
   ];
   // a body without fields (e.g. {}) gets unknown keys and whole-body junk only
   if (paths.length) {

@@ -1,6 +1,6 @@
 import { notFound } from "next/navigation";
 import { requirePageMember } from "@/app/_lib/access";
-import { devInboxEnabled, listDevMailForWorkspace } from "@/app/_lib/accounts/dev-inbox";
+import { devInboxEnabled, listDevMailForMember } from "@/app/_lib/accounts/dev-inbox";
 import { appOrigin } from "@/app/_lib/request-guards";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { EmptyState } from "@/components/ui/EmptyState";
@@ -10,18 +10,19 @@ export const metadata = { title: "Dev inbox · Heatsplit" };
 
 const timeFormat = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "medium" });
 
-// Development only (HEATSPLIT_DEV_INBOX=1): the mail the fake SMTP server
-// caught for this workspace's members and invited addresses, so sign-up,
-// invite and reset links can be followed without a real mailbox.
+// Development only (HEATSPLIT_DEV_INBOX=1 and mail going to the local fake
+// SMTP server): the reader's own mail, i.e. messages addressed to them and
+// messages their actions caused, the latter without their links (a link in
+// someone else's mail would let the reader act as that person).
 export default async function DevInboxPage() {
   if (!devInboxEnabled()) notFound();
   const member = await requirePageMember("dev:inbox");
-  const mail = await listDevMailForWorkspace(member);
+  const mail = await listDevMailForMember(member);
   return (
     <>
-      <PageHeader title="Development inbox" subtitle="Messages the local mail catcher received for members of this workspace and the people it invited. Not present in production." />
+      <PageHeader title="Development inbox" subtitle="Messages the local mail catcher received for you, and the ones your actions sent to others (their links withheld: only the recipient may follow them). Not present in production." />
       {mail.length === 0 ? (
-        <EmptyState title="No mail yet">Invite someone or ask for a password reset; the message appears here.</EmptyState>
+        <EmptyState title="No mail yet">Mail addressed to you, or sent because of something you did, appears here.</EmptyState>
       ) : (
         <ol className="flex flex-col gap-4">
           {mail.map((m) => (

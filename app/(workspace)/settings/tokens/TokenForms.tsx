@@ -5,7 +5,7 @@ import { FormMessage, Select, SubmitButton, TextInput } from "@/components/ui";
 import { createTokenAction, revokeTokenAction } from "./actions";
 import { TOKEN_EXPIRY_CHOICES } from "./schema";
 
-const EXPIRY_OPTIONS = [{ value: "", label: "Never" }, ...TOKEN_EXPIRY_CHOICES.map((d) => ({ value: String(d), label: `In ${d} days` }))];
+const EXPIRY_OPTIONS = TOKEN_EXPIRY_CHOICES.map((d) => ({ value: String(d), label: d === 365 ? "In a year" : `In ${d} days` }));
 
 export function CreateTokenForm() {
   const [state, formAction] = useActionState(createTokenAction, IDLE);
@@ -17,6 +17,7 @@ export function CreateTokenForm() {
         <TextInput name="name" label="Name" hint="What uses it, e.g. “CI sweep job”." autoComplete="off" required error={errors.name} />
         <Select name="expiresInDays" label="Expires" options={EXPIRY_OPTIONS} defaultValue="90" error={errors.expiresInDays} />
       </div>
+      <TextInput name="password" type="password" label="Your password" hint="Making a token needs your password again." autoComplete="current-password" required error={errors.password} />
       <FormMessage state={state} />
       {secret && (
         <div className="rounded-md border border-copper-100 bg-copper-50 p-3">

@@ -1,21 +1,22 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { headers } from "next/headers";
 import { action } from "@/app/_lib/access";
-import { issueApiToken } from "@/app/_lib/api-tokens";
-import { revokeApiTokenById } from "@/db/queries/api-tokens";
+import { issueApiToken, revokeOwnApiToken } from "@/app/_lib/api-tokens";
+import { clientAddress } from "@/app/_lib/client-address";
 import { tokenCreateSchema, tokenRevokeFormSchema } from "./schema";
 
 // The secret goes back once, in the state of the action that made it; the
 // page never shows it again (only the SHA-256 is stored).
 export const createTokenAction = action({ permission: "token:own", schema: tokenCreateSchema }, async (input, member) => {
-  const { token, secret } = await issueApiToken(member, input);
+  const { token, secret } = await issueApiToken(member, input, clientAddress(await headers()));
   revalidatePath("/settings/tokens");
   return { ok: true, message: `Token "${token.name}" created. Copy it now: it is shown only this once.`, data: { secret } };
 });
 
 export const revokeTokenAction = action({ permission: "token:own", schema: tokenRevokeFormSchema }, async (input, member) => {
-  const revoked = await revokeApiTokenById({ userId: member.user.id, workspaceId: member.workspace.id, tokenId: input.id });
+  const revoked = await revokeOwnApiToken(member, input.id);
   if (!revoked) return { ok: false, message: "No such token.", fieldErrors: {} };
   revalidatePath("/settings/tokens");
   return { ok: true, message: "Revoked." };

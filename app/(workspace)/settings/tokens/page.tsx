@@ -10,7 +10,7 @@ const when = (iso: string | null) => (iso ? `${iso.slice(0, 16).replace("T", " "
 
 function state(t: ApiTokenRecord, now: number): { label: string; tone: "ok" | "over" | "neutral" } {
   if (t.revokedAt) return { label: "revoked", tone: "neutral" };
-  if (t.expiresAt && Date.parse(t.expiresAt) <= now) return { label: "expired", tone: "over" };
+  if (Date.parse(t.expiresAt) <= now) return { label: "expired", tone: "over" };
   return { label: "active", tone: "ok" };
 }
 
@@ -51,7 +51,7 @@ export default async function TokensPage() {
                     <Badge tone={s.tone}>{s.label}</Badge>
                   </Td>
                   <Td>{when(t.createdAt)}</Td>
-                  <Td>{t.expiresAt ? when(t.expiresAt) : "never"}</Td>
+                  <Td>{when(t.expiresAt)}</Td>
                   <Td>{when(t.lastUsedAt)}</Td>
                   <Td className="text-right">{s.label === "active" && <RevokeTokenForm id={t.id} name={t.name} />}</Td>
                 </Tr>

@@ -12,7 +12,7 @@ import { getRevisionByNumber } from "@/db/queries/options";
 //   option revision of the caller's workspace (another's: 404). A sweep spec
 //   is tried on its first row here, so a bad part or axis is a 400 now rather
 //   than a failed job later.
-export const POST = route({ permission: "read", body: jobCreateSchema }, async ({ member, body }) => {
+export const POST = route({ permission: "job:start", body: jobCreateSchema }, async ({ member, body }) => {
   const rev = await loadInWorkspace(member, (workspaceId) => getRevisionByNumber({ workspaceId, optionId: body.payload.optionId, revision: body.payload.revision }));
   const parsed = parseDesign(rev.document);
   if (!parsed.ok) throw new AppError("bad_request", `Revision ${rev.revision} does not evaluate; fix it in the editor.`, parsed.issues);

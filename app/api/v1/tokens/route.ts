@@ -1,5 +1,6 @@
 import { reply, route } from "@/app/_lib/access";
 import { issueApiToken, requireSessionMember } from "@/app/_lib/api-tokens";
+import { clientAddress } from "@/app/_lib/client-address";
 import { tokenCreateSchema } from "@/app/(workspace)/settings/tokens/schema";
 import { listApiTokensByUser } from "@/db/queries/api-tokens";
 
@@ -12,8 +13,9 @@ export const GET = route({ permission: "token:own" }, async ({ member }) => {
   return { items: await listApiTokensByUser({ userId: member.user.id, workspaceId: member.workspace.id }) };
 });
 
-// POST /api/v1/tokens { name, expiresInDays? } -> 201 { token, secret } (the secret this once)
-export const POST = route({ permission: "token:own", body: tokenCreateSchema }, async ({ member, body }) => {
-  const { token, secret } = await issueApiToken(member, body);
+// POST /api/v1/tokens { name, expiresInDays (1-365), password } -> 201 { token, secret } (the secret this once)
+// A wrong password is a 400 on "password", counted by the sign-in throttle.
+export const POST = route({ permission: "token:own", body: tokenCreateSchema }, async ({ member, body, req }) => {
+  const { token, secret } = await issueApiToken(member, body, clientAddress(req.headers));
   return reply({ token, secret }, 201);
 });

@@ -14,7 +14,17 @@ const ACTION_TEXT: Record<string, string> = {
   "review.approved": "approved",
   "review.rejected": "rejected",
   "option.chosen": "chose the option",
+  "option.renamed": "renamed the option",
+  "option.archived": "archived the option",
+  "option.restored": "restored the option",
   "derating.changed": "changed the workspace derating policy",
+  "member.role_changed": "changed a member's role",
+  "member.removed": "removed a member",
+  "token.created": "created an API token",
+  "token.revoked": "revoked an API token",
+  "part.updated": "edited a part",
+  "part.deleted": "deleted a part",
+  "parts.imported": "imported parts",
 };
 
 function what(e: ActivityEntry, projectId: string) {
@@ -24,8 +34,17 @@ function what(e: ActivityEntry, projectId: string) {
   return <Link className="underline" href={href}>{label}</Link>;
 }
 
+const str = (v: unknown) => (typeof v === "string" ? v : "");
+
 function detailText(e: ActivityEntry): string {
   const d = e.detail as Record<string, unknown>;
+  const member = d.member as { displayName?: unknown } | undefined;
+  if (e.action === "option.renamed") return `${str(d.from)} → ${str(d.to)}`;
+  if (e.action === "member.role_changed") return `${str(member?.displayName)}: ${str(d.from)} → ${str(d.to)}`;
+  if (e.action === "member.removed") return `${str(member?.displayName)} (${str(d.role)})`;
+  if (e.action.startsWith("token.")) return str(d.name);
+  if (e.action.startsWith("part.")) return `${str(d.manufacturer)} ${str(d.mpn)}`.trim();
+  if (e.action === "parts.imported") return `${Number(d.created) || 0} new, ${Number(d.updated) || 0} updated`;
   if (typeof d.reason === "string") return d.reason;
   if (typeof d.note === "string") return d.note;
   if (typeof d.comments === "number" && d.comments > 0) return `${d.comments} comment${d.comments === 1 ? "" : "s"}`;
@@ -40,7 +59,7 @@ export default async function ActivityPage({ params }: { params: Promise<{ proje
   const items = await listActivityByProject({ workspaceId: member.workspace.id, projectId: project.id });
   return (
     <>
-      <PageHeader title="Activity" subtitle={`${project.name}: every saved revision, review step, choice and derating change, as it happened. Entries cannot be edited or removed.`} back={{ href: `/projects/${project.id}`, label: project.name }} />
+      <PageHeader title="Activity" subtitle={`${project.name}: every saved revision, review step, choice and option change, and the workspace-wide changes (derating, members, API tokens, parts), with the names as they were then. Entries cannot be edited or removed.`} back={{ href: `/projects/${project.id}`, label: project.name }} />
       {items.length === 0 ? (
         <EmptyState title="Nothing yet">Saved revisions, reviews and choices will appear here.</EmptyState>
       ) : (

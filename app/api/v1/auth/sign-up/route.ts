@@ -1,9 +1,13 @@
 import { publicRoute, reply } from "@/app/_lib/access";
 import { signUpSchema } from "@/app/_lib/accounts/schemas";
-import { signUp } from "@/app/_lib/accounts/sign-up";
+import { SIGN_UP_REQUESTED_MESSAGE, requestSignUp } from "@/app/_lib/accounts/sign-up";
+import { clientAddress } from "@/app/_lib/client-address";
 
-// Creates an account and its workspace (creator = admin) and signs in.
-export const POST = publicRoute({ body: signUpSchema }, async ({ body }) => {
-  const { user, workspace } = await signUp(body);
-  return reply({ user, workspace, role: "admin" }, 201);
+// Starts a sign-up: 202 { message } whether or not the address has an
+// account (a new one gets a link to finish, an existing one a notice), so
+// the answer tells nobody which addresses are registered. Throttled per
+// client address (429).
+export const POST = publicRoute({ body: signUpSchema }, async ({ body, member, req }) => {
+  await requestSignUp(body, { address: clientAddress(req.headers), causedBy: member?.user.id ?? null });
+  return reply({ message: SIGN_UP_REQUESTED_MESSAGE }, 202);
 });

@@ -7,7 +7,7 @@ import { listAllPartsByWorkspace } from "@/db/queries/parts";
 export const GET = route({ permission: "read", query: partListQuerySchema }, async ({ member, query }) => {
   const parts = await listAllPartsByWorkspace({ workspaceId: member.workspace.id, filter: query });
   const day = new Date().toISOString().slice(0, 10);
-  return new Response(`\uFEFF${serializePartsCsv(parts)}\r\n`, {
+  return new Response(`\uFEFF${serializePartsCsv(parts)}`, {
     headers: {
       "content-type": "text/csv; charset=utf-8",
       "content-disposition": `attachment; filename="heatsplit-parts-${day}.csv"`,

@@ -1,13 +1,11 @@
 import { route } from "@/app/_lib/access";
 import { AppError } from "@/app/_lib/errors";
-import { requireSessionMember } from "@/app/_lib/api-tokens";
+import { revokeOwnApiToken } from "@/app/_lib/api-tokens";
 import { tokenParamsSchema } from "@/app/(workspace)/settings/tokens/schema";
-import { revokeApiTokenById } from "@/db/queries/api-tokens";
 
 // DELETE /api/v1/tokens/:tokenId -> 204; another user's token is not found (404).
 export const DELETE = route({ permission: "token:own", params: tokenParamsSchema }, async ({ member, params }) => {
-  requireSessionMember(member);
-  const revoked = await revokeApiTokenById({ userId: member.user.id, workspaceId: member.workspace.id, tokenId: params.tokenId });
+  const revoked = await revokeOwnApiToken(member, params.tokenId);
   if (!revoked) throw new AppError("not_found", "Not found.");
   return undefined;
 });

@@ -3,7 +3,7 @@ import { forgotPasswordSchema } from "@/app/_lib/accounts/schemas";
 import { RESET_REQUESTED_MESSAGE, requestPasswordReset } from "@/app/_lib/accounts/password-reset";
 
 // Same answer whether or not the address has an account.
-export const POST = publicRoute({ body: forgotPasswordSchema }, async ({ body }) => {
-  await requestPasswordReset(body.email);
+export const POST = publicRoute({ body: forgotPasswordSchema }, async ({ body, member }) => {
+  requestPasswordReset(body.email, member?.user.id ?? null);
   return { message: RESET_REQUESTED_MESSAGE };
 });

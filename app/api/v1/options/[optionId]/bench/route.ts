@@ -1,6 +1,7 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
 import { AppError } from "@/app/_lib/errors";
-import { refuseNulBytes } from "@/app/_lib/request-guards";
+import { refuseUnstorableText } from "@/app/_lib/request-guards";
+import { readFormLimited } from "@/app/_lib/body-limit";
 import { storeBenchUpload } from "@/app/_lib/bench/store";
 import { MAX_BENCH_BYTES, benchParamsSchema, benchUploadFieldsSchema } from "@/app/(workspace)/projects/[projectId]/options/[optionId]/bench/schema";
 import { getDesignOptionById } from "@/db/queries/options";
@@ -16,15 +17,15 @@ export const GET = route({ permission: "read", params: benchParamsSchema }, asyn
 //   -> 201 { run } | 400 with one issue per bad row (nothing stored)
 export const POST = route({ permission: "bench:write", params: benchParamsSchema }, async ({ member, params, req }) => {
   const option = await loadInWorkspace(member, (workspaceId) => getDesignOptionById({ workspaceId, optionId: params.optionId }));
-  if (Number(req.headers.get("content-length") ?? "0") > MAX_BENCH_BYTES + 64 * 1024) throw new AppError("payload_too_large", `A bench file may be at most ${MAX_BENCH_BYTES / 1024} kB.`);
+  const tooLarge = () => new AppError("payload_too_large", `A bench file may be at most ${MAX_BENCH_BYTES / 1024} kB.`);
   if (!(req.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data"))
     throw new AppError("unsupported_media_type", 'Send the CSV as the multipart form field "file".');
-  const form = await req.formData();
+  const form = await readFormLimited(req, MAX_BENCH_BYTES + 64 * 1024, tooLarge); // the limit holds while the body streams
   const file = form.get("file");
   if (!(file instanceof File)) throw new AppError("bad_request", 'Attach the CSV as the form field "file".', [{ path: "file", message: "choose a CSV file" }]);
-  if (file.size > MAX_BENCH_BYTES) throw new AppError("payload_too_large", `A bench file may be at most ${MAX_BENCH_BYTES / 1024} kB.`);
+  if (file.size > MAX_BENCH_BYTES) throw tooLarge();
   const bytes = new Uint8Array(await file.arrayBuffer());
-  refuseNulBytes({ file: file.name });
+  refuseUnstorableText({ file: file.name });
   if (bytes.includes(0)) throw new AppError("bad_request", "The file contains NUL bytes; send a CSV text file.", [{ path: "file", message: "contains a NUL (U+0000) character" }]);
   const fields = benchUploadFieldsSchema.safeParse({ revision: form.get("revision") ?? option.latestRevision });
   if (!fields.success) throw new AppError("bad_request", "Check the form.", fields.error.issues.map((i) => ({ path: i.path.join("."), message: i.message })));

@@ -5,21 +5,21 @@ import { getObjectStream } from "@/app/_lib/storage";
 import { partParamsSchema } from "@/app/(workspace)/parts/schema";
 import { getPartById } from "@/db/queries/parts";
 import { getStoredFileById } from "@/db/queries/files";
-import { refuseNulBytes } from "@/app/_lib/request-guards";
+import { refuseUnstorableText } from "@/app/_lib/request-guards";
+import { readFormLimited } from "@/app/_lib/body-limit";
 
 // POST /api/v1/parts/:partId/datasheet (multipart field "file", a PDF up to
 // MAX_DATASHEET_BYTES) -> 201 { datasheet }; too big 413, not a PDF 415.
 // Replaces the previous datasheet.
 export const POST = route({ permission: "part:write", params: partParamsSchema }, async ({ member, params, req }) => {
   const part = await loadInWorkspace(member, (workspaceId) => getPartById({ workspaceId, id: params.partId }));
-  if (Number(req.headers.get("content-length") ?? "0") > MAX_DATASHEET_BYTES + MULTIPART_OVERHEAD_BYTES)
-    throw new AppError("payload_too_large", `A datasheet may be at most ${MAX_DATASHEET_BYTES / (1024 * 1024)} MB.`);
+  const tooLarge = () => new AppError("payload_too_large", `A datasheet may be at most ${MAX_DATASHEET_BYTES / (1024 * 1024)} MB.`);
   if (!(req.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data"))
     throw new AppError("unsupported_media_type", 'Send the PDF as the multipart form field "file".');
-  const file = (await req.formData()).get("file");
+  const file = (await readFormLimited(req, MAX_DATASHEET_BYTES + MULTIPART_OVERHEAD_BYTES, tooLarge)).get("file"); // the limit holds while the body streams
   if (!(file instanceof File)) throw new AppError("bad_request", 'Attach the PDF as the form field "file".');
-  if (file.size > MAX_DATASHEET_BYTES) throw new AppError("payload_too_large", `A datasheet may be at most ${MAX_DATASHEET_BYTES / (1024 * 1024)} MB.`);
-  refuseNulBytes({ file: file.name });
+  if (file.size > MAX_DATASHEET_BYTES) throw tooLarge();
+  refuseUnstorableText({ file: file.name });
   const bytes = new Uint8Array(await file.arrayBuffer());
   const stored = await replacePartDatasheet({
     workspaceId: member.workspace.id,
