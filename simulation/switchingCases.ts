@@ -41,7 +41,7 @@ export const SWITCHING_CASES: SwitchingCase[] = [
 export function findCase(part: ReferencePart, o: { iLoad: number; rGate: number; vLow: number; lLoop: number; lCommonSource?: number }): SwitchingCase {
   const c = SWITCHING_CASES.find(
     (x) =>
-      x.part === part &&
+      x.part.card.name === part.card.name &&
       x.circuit.iLoad === o.iLoad &&
       x.circuit.rGate === o.rGate &&
       x.circuit.vLow === o.vLow &&

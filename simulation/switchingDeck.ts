@@ -11,7 +11,9 @@
 // optionally with a common-source inductance from its source pin to ground,
 // which is also the gate drive's return; the gate driven by an ideal PULSE
 // source between V+ and V− through the external gate resistor (the card's Rg
-// is the internal one).
+// is the internal one). Gear integration: the trapezoidal rule rings from
+// step to step where the diode clamps the drain. Time step and tolerance
+// come from the caller (switchingRun.ts says why they are what they are).
 import { modelLine, type VdmosCard } from "./mosfetCard";
 import { sp } from "./ngspice";
 
@@ -35,7 +37,7 @@ export interface EdgeRun {
   window: number;
   /** Largest time step, s. */
   tMax: number;
-  /** Relative tolerance (ngspice default 1e-3); the convergence check runs 1e-4. */
+  /** Relative tolerance (ngspice's default 1e-3). */
   reltol?: number;
 }
 
@@ -88,7 +90,7 @@ Rgate gd g ${sp(c.rGate)}
 .control
 set wr_singlescale
 set wr_vecnames
-option numdgt=12
+option numdgt=9
 save all @m1[id] @m1[vds]
 op
 tran ${sp(run.tMax)} ${sp(tEnd)} 0 ${sp(run.tMax)}
@@ -116,7 +118,9 @@ wrdata ${WAVE_FILE} ${WAVE_COLUMNS.join(" ")}
  * Id·Rds(on) is taken as 0); instance B has its gate ramped to vLow and then
  * its drain to vBus (the off state). The capacitances are charge-based
  * two-terminal elements, so the energy is a function of the state and the
- * path does not matter. Prints e_on_state and e_off_state, J.
+ * path does not matter. Prints e_on_state and e_off_state, J, and
+ * e_off_gate, B's energy when its gate has reached vLow (so e_off_state −
+ * e_off_gate is the Coss energy at the bus with the gate held at vLow).
  */
 export function storedEnergyDeck(card: VdmosCard, o: { vHigh: number; vLow: number; vBus: number }, ramp = 20e-6): string {
   const t1 = ramp;
@@ -135,6 +139,7 @@ tran ${sp(ramp / 4000)} ${sp(t2)} 0 ${sp(ramp / 4000)}
 let pa = -v(ga)*i(Vga)
 let pb = -v(gb)*i(Vgb) - v(db)*i(Vdb)
 meas tran e_on_state integ pa from=0 to=${sp(t2)}
+meas tran e_off_gate integ pb from=0 to=${sp(t1)}
 meas tran e_off_state integ pb from=0 to=${sp(t2)}
 .endc
 .end

@@ -7,18 +7,24 @@
 // Coss charge across the bus, plus LOOP_SETTLE for the damped loop ringing.
 // That is generous on purpose: the energies have the conduction taken off
 // and stop growing once the edge is over (`windowSensitivity`). Time step:
-// at most WINDOW_STEPS per window and never over 50 ps. Convergence: ngspice
-// defaults (trapezoidal, reltol 1e-3) with abstol 10 nA; `checkConvergence`
-// reruns with reltol 1e-4 and a quarter of the time step.
+// at most 1/WINDOW_STEPS of the window and 100 ps; when the run shows a
+// 10-90 % edge shorter than EDGE_STEPS such steps, it is rerun with steps
+// of 1/EDGE_STEPS of that edge (the sub-nanosecond current edges, whose
+// di/dt max needs them). Tolerances: reltol 1e-4 (ngspice's default is
+// 1e-3), abstol 10 nA, Gear integration (the trapezoidal rule rings at the
+// step where the diode clamps). `tighten: k` divides the step by k and
+// reltol by k², for the convergence check (tests/spice/reference-convergence).
 import type { ClampedCircuit } from "./switchingDeck";
 import { WAVE_FILE, clampedEdgeDeck, storedEnergyDeck } from "./switchingDeck";
 import { measureEdge, type EdgeFigures } from "./switchingEdge";
 import { runNgspice, valueOf } from "./ngspice";
 
-const WINDOW_TAUS = 8;
+const WINDOW_TAUS = 5;
 const LOOP_SETTLE = 150e-9;
 const WINDOW_STEPS = 12_000;
-const MAX_STEP = 20e-12;
+const MAX_STEP = 100e-12;
+const EDGE_STEPS = 40;
+const RELTOL = 1e-4;
 
 export interface CycleFigures {
   on: EdgeFigures;
@@ -30,19 +36,21 @@ export interface CycleFigures {
   /** Energy in the switch's capacitances fully on (Vds ≈ 0, Vgs = V+) and off (Vds = bus, Vgs = V−), J. */
   storedOn: number;
   storedOff: number;
+  /** Coss energy at the bus voltage with the gate held at V− (Eoss itself when V− = 0), J. */
+  eossAtVLow: number;
   /**
    * Energy balance of the switch per edge, relative to what entered it:
    * (terminal + gate port − channel − internal resistors − change of stored
    * energy) / the larger of (terminal + |gate port|) and channel, all raw
-   * over the window. The stored
-   * energies come from a separate slow-ramp deck, so this ties the channel
-   * current, the terminal probes and the capacitances together.
+   * over the window. The stored energies come from a separate slow-ramp
+   * deck, so this ties the channel current, the terminal probes and the
+   * capacitances together.
    */
   deviceBalance: { on: number; off: number };
 }
 
 export interface EdgeOptions {
-  /** Time-step and tolerance tightening for the convergence check: 1 (as used) or 4. */
+  /** Tightening for the convergence check: the time step divided by it, reltol by its square (1: as used). */
   tighten?: number;
 }
 
@@ -64,9 +72,14 @@ function junctionCharge(c: ClampedCircuit): number {
 export async function runEdge(c: ClampedCircuit, edge: "on" | "off", o: EdgeOptions = {}): Promise<EdgeFigures> {
   const k = o.tighten ?? 1;
   const window = edgeWindow(c);
-  const tMax = Math.min(window / WINDOW_STEPS, MAX_STEP) / k;
-  const r = await runNgspice(clampedEdgeDeck(c, { edge, window, tMax, reltol: k > 1 ? 1e-4 : 1e-3 }), { files: [WAVE_FILE], timeoutMs: 60_000 });
-  return measureEdge(r.files[WAVE_FILE], c, edge, window);
+  const once = async (tMax: number) => {
+    const r = await runNgspice(clampedEdgeDeck(c, { edge, window, tMax: tMax / k, reltol: RELTOL / k ** 2 }), { files: [WAVE_FILE], timeoutMs: 60_000 });
+    return measureEdge(r.files[WAVE_FILE], c, edge, window);
+  };
+  const coarse = Math.min(window / WINDOW_STEPS, MAX_STEP);
+  const first = await once(coarse);
+  const fine = Math.min(first.tCurrent, first.tVoltage) / EDGE_STEPS;
+  return fine < coarse ? once(fine) : first;
 }
 
 export async function runCycle(c: ClampedCircuit, o: EdgeOptions = {}): Promise<CycleFigures> {
@@ -86,6 +99,7 @@ export async function runCycle(c: ClampedCircuit, o: EdgeOptions = {}): Promise<
     switchHeat: on.energy.terminal + off.energy.terminal,
     channelHeat: on.energy.channel + off.energy.channel,
     storedOn, storedOff,
+    eossAtVLow: storedOff - valueOf(st, "e_off_gate"),
     deviceBalance: { on: balance(on, storedOn - storedOff), off: balance(off, storedOff - storedOn) },
   };
 }
