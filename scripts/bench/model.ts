@@ -12,7 +12,7 @@ import { parseDesign, type Design } from "../../models/schema";
 import { evaluateDesign } from "../../models/evaluate";
 import { sweepGrid, type SweepSpec } from "../../models/sweep";
 import { monteCarlo } from "../../models/spread";
-import { findNgspice, runNgspice } from "../../tests/spice/ngspice";
+import { findNgspice, runNgspice } from "../../simulation/ngspice";
 import { splitNetlist, type GateNetwork } from "../../tests/spice/netlists";
 import { curveLoad } from "../../tests/spice/fromModel";
 

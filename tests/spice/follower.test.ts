@@ -6,7 +6,7 @@
 // VCE = 2 V, the way a datasheet plot is measured.
 import { beforeAll, describe, expect, it } from "vitest";
 import { demoOptions, evaluateDesign, type DesignInput } from "@/models";
-import { runNgspice, valueOf } from "./ngspice";
+import { runNgspice, valueOf } from "@/simulation/ngspice";
 import { followerNetlist, hfeNetlist, type BjtCard, type FollowerNetwork } from "./netlists";
 import { curveLoad, designOf } from "./fromModel";
 

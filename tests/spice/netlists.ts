@@ -1,7 +1,7 @@
 // Netlist builders for the comparisons. Inputs are plain SI circuit values, so
 // each test builds the SAME circuit the model is given (values taken from a
 // demo option) and nothing here knows the model's formulas.
-import { sp } from "./ngspice";
+import { sp } from "@/simulation/ngspice";
 
 /** Gate load: a linear capacitance, or a piecewise-linear Q(Vgs) through (v, q) points. */
 export type GateLoad = { kind: "linear"; c: number } | { kind: "curve"; points: Array<[number, number]> };

@@ -1,6 +1,6 @@
 // The runner itself: values parsed from `meas`/`print`, problems reported, a missing binary named.
 import { afterEach, describe, expect, it } from "vitest";
-import { NgspiceError, parseValues, runNgspice, valueOf } from "./ngspice";
+import { NgspiceError, parseValues, runNgspice, valueOf } from "@/simulation/ngspice";
 
 const RC = `* RC step
 V1 in 0 PULSE(0 1 1n 1p 1p 1 2)

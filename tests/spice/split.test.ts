@@ -3,7 +3,7 @@
 // rTurnOff 1 Ω, Rg(int) 1 Ω, gate charge of QN-150F12), built from the model's inputs.
 import { describe, expect, it } from "vitest";
 import { demoOptions, evaluateDesign, type Design } from "@/models";
-import { runNgspice, valueOf } from "./ngspice";
+import { runNgspice, valueOf } from "@/simulation/ngspice";
 import { splitNetlist, type GateLoad, type GateNetwork } from "./netlists";
 import { curveLoad, designOf, integralVdQ, chargeOn } from "./fromModel";
 

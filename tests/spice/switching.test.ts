@@ -4,7 +4,7 @@
 // gate-charge test (Qgs, Qgd, Qg, Vpl, slope below the plateau) and Vth at 250 µA.
 import { beforeAll, describe, expect, it } from "vitest";
 import { evaluateDesign, type EdgeResult } from "@/models";
-import { runNgspice, valueOf } from "./ngspice";
+import { runNgspice, valueOf } from "@/simulation/ngspice";
 import { turnOffNetlist } from "./netlists";
 import { DEVICE, LOAD, V_HIGH, edgeCheckDesign, sheet, type Sheet } from "./vdmosSheet";
 import { designOf } from "./fromModel";

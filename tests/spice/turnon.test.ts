@@ -63,7 +63,7 @@
 // a further factor of about 1.3 fails.
 import { beforeAll, describe, expect, it } from "vitest";
 import { evaluateDesign, type EdgeResult } from "@/models";
-import { runNgspice, sp, valueOf } from "./ngspice";
+import { runNgspice, sp, valueOf } from "@/simulation/ngspice";
 import { turnOnNetlist } from "./netlists";
 import { DEVICE, EDGE_FSW as FSW, LOAD, V_HIGH, edgeCheckDesign, sheet, type Sheet } from "./vdmosSheet";
 import { designOf } from "./fromModel";

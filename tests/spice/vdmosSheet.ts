@@ -4,7 +4,7 @@
 // gate-charge test (Qgs, Qgd, Qg, Vpl, Ciss from the slope below the
 // plateau) and Vth at 250 µA.
 import type { DesignInput } from "@/models";
-import { runNgspice, valueOf } from "./ngspice";
+import { runNgspice, valueOf } from "@/simulation/ngspice";
 import { gateChargeNetlist, thresholdNetlist, type VdmosCard } from "./netlists";
 
 export const DEVICE: VdmosCard = {
