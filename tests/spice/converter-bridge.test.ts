@@ -6,7 +6,7 @@
 // driven open loop with the calculator's duty from its periodic state and
 // measured in the last period (converterBench.ts).
 import type { ConverterSpec, OperatingPoint, PositionFigures } from "@/models/converter/types";
-import { sp } from "./ngspice";
+import { sp } from "@/simulation/ngspice";
 import { diodePos, gate, mosfet } from "./converterDeck";
 import { benchSuite, type Bench } from "./converterBench";
 

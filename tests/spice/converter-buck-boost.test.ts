@@ -6,7 +6,7 @@
 // a large input capacitor dropping (1 − η)·Vin: the currents and the duty
 // must then follow the efficiency too.
 import type { ConverterSpec, OperatingPoint, PositionFigures } from "@/models/converter/types";
-import { sp } from "./ngspice";
+import { sp } from "@/simulation/ngspice";
 import { diodePos, gate, mosfet } from "./converterDeck";
 import { benchSuite, type Bench } from "./converterBench";
 

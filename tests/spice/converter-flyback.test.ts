@@ -7,7 +7,7 @@
 // simulation settles at checks the duty; every other figure is measured
 // with `meas` over the last period (converterBench.ts).
 import type { ConverterSpec, OperatingPoint } from "@/models/converter/types";
-import { sp } from "./ngspice";
+import { sp } from "@/simulation/ngspice";
 import { diodePos, gate, mosfet } from "./converterDeck";
 import { benchSuite, type Bench } from "./converterBench";
 

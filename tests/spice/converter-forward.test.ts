@@ -4,7 +4,7 @@
 // open loop with the calculator's duty and measured in the last period
 // (converterBench.ts).
 import type { ConverterSpec, OperatingPoint } from "@/models/converter/types";
-import { sp } from "./ngspice";
+import { sp } from "@/simulation/ngspice";
 import { diodePos, gate, mosfet } from "./converterDeck";
 import { benchSuite, type Bench } from "./converterBench";
 

@@ -6,9 +6,9 @@
 // compared in absolute terms against the position's own scale.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { ConverterSpec, OperatingPoint, PositionFigures } from "@/models/converter/types";
-import { runNgspice } from "./ngspice";
+import { runNgspice } from "@/simulation/ngspice";
 import { BAND, Ratios, STEADY, at, avg, calcPoint, closeTo, deck, edgeSamples, extrapolated, rms } from "./converterDeck";
-import { sp } from "./ngspice";
+import { sp } from "@/simulation/ngspice";
 
 export interface Probe {
   /** Channel (or diode) current in the calculator's sign: drain→source for switches, rectifying for rectifiers. */

@@ -7,7 +7,7 @@
 import { expect } from "vitest";
 import { operatingPoint } from "@/models/converter/calculate";
 import type { ConverterSpec, OperatingPoint } from "@/models/converter/types";
-import { sp } from "./ngspice";
+import { sp } from "@/simulation/ngspice";
 
 export const MODELS = [
   ".model SWM SW(VT=0.5 VH=0 RON=1m ROFF=1e8)",
