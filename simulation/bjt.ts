@@ -65,3 +65,9 @@ export function depletionCapacitance(c0: number, vj: number, m: number, v: numbe
   if (v < fc * vj) return c0 / Math.pow(1 - v / vj, m);
   return (c0 / Math.pow(1 - fc, 1 + m)) * (1 - fc * (1 + m) + (m * v) / vj);
 }
+
+/** Charge on a depletion capacitance from 0 V to v (v below FC·vj, e.g. any reverse bias), C. */
+export function depletionCharge(c0: number, vj: number, m: number, v: number): number {
+  if (v > 0.5 * vj) throw new Error("depletionCharge: forward bias beyond FC·VJ is not covered");
+  return ((c0 * vj) / (1 - m)) * (1 - Math.pow(1 - v / vj, 1 - m));
+}
