@@ -58,15 +58,20 @@ export function followerCase(s: FollowerSpec): FollowerCase {
 const FAMILIES: BjtFamily[] = ["small", "high"];
 const FREQUENCIES = [100e3, 500e3];
 
-/** Each family × gate × frequency × base resistor × pin stage, then the extra cases. */
+/**
+ * Each family × gate × frequency × base resistor with the Thevenin pin, the same at 500 kHz with
+ * the push-pull pin (the stage changes only what happens inside the pin's own edge), then the extras.
+ */
 export const FOLLOWER_SPECS: FollowerSpec[] = [
-  ...FAMILIES.flatMap((family) => (["20nC", "100nC"] as GateName[]).flatMap((gate) => FREQUENCIES.flatMap((fsw) =>
-    [0, 4.7].flatMap((rBase) => (["thevenin", "push-pull"] as PinStage[]).map((stage) => ({ family, gate, fsw, rBase, stage })))))),
+  ...FAMILIES.flatMap((family) => (["20nC", "100nC"] as GateName[]).flatMap((gate) => [0, 4.7].flatMap((rBase) => [
+    ...FREQUENCIES.map((fsw) => ({ family, gate, fsw, rBase, stage: "thevenin" as const })),
+    { family, gate, fsw: 500e3, rBase, stage: "push-pull" as const },
+  ]))),
   // A large base resistor: the pin's base current times hFE(Ic) caps the gate current.
   ...FAMILIES.map((family) => ({ family, gate: "100nC" as const, fsw: 100e3, rBase: 100, stage: "thevenin" as const })),
   // The pin straight into the gate resistor: what the follower takes off the controller.
   ...(["20nC", "100nC"] as GateName[]).flatMap((gate) => (["thevenin", "push-pull"] as PinStage[]).map((stage) =>
-    ({ family: "small" as const, gate, fsw: 100e3, rBase: 0, stage, direct: true }))),
+    ({ family: "small" as const, gate, fsw: 500e3, rBase: 0, stage, direct: true }))),
   // A real switch (VDMOS, 48 V / 10 A clamped inductive load) as the gate.
   ...FAMILIES.map((family) => ({ family, gate: "switch" as const, fsw: 100e3, rBase: 4.7, stage: "thevenin" as const })),
   // The PNP's collector at −5 V, and a pin with source/sink current limits.
