@@ -6,14 +6,21 @@ import { runNgspice, valueOf } from "./run";
 export interface FollowerMeasurement {
   /** Heat in the pin's own source/sink resistance: the controller's share. */
   pinHeat: PerEdge;
-  /** Energy the pin's source delivers (what the controller draws for this pin from Vcc). */
+  /**
+   * Energy the pin's source delivers (what the controller draws for this pin from Vcc). With the
+   * Thevenin pin it can be negative on the falling edge: the PULSE absorbs the current that flows
+   * while it is still ramping, which a real output stage would burn.
+   */
   pinSupply: PerEdge;
   /** Net charge out of the pin per window, and ∫|i| (sourced + sunk). */
   pinCharge: PerEdge;
   pinChargeAbs: PerEdge;
   pinPeakSource: number;
   pinPeakSink: number; // positive, A
-  /** Pin current just before the falling edge: the DC base current while the gate is held high. */
+  /**
+   * Pin current 1 ns before the falling edge: the DC base current while the gate is held high, once
+   * the gate's tail has died (at 500 kHz a large gate can still be settling, and it reads near 0).
+   */
   pinHoldHigh: number;
   npn: PerEdge; // VCE·IC + VBE·IB, J (zero in direct drive)
   pnp: PerEdge;
@@ -25,7 +32,7 @@ export interface FollowerMeasurement {
   gate: PerEdge;
   vcc: PerEdge; // NPN collector rail
   vNeg: PerEdge; // PNP collector rail
-  gateCharge: PerEdge;
+  gateCharge: PerEdge; // through the gate resistor (the pull-down's share included)
   igOnPeak: number;
   igOffPeak: number; // positive, A
   vgTop: number;
