@@ -120,6 +120,9 @@ function followerEdge(
     starved: pl.current < STARVATION_FRACTION * pl.nominal,
     hfe: h,
     hfeNominal: peakHfe(t.hfe),
+    // Quasi-static follower seen from the gate: base path divided by (hFE+1) in
+    // series with the gate resistors, gain-limited at (hFE+1)·pin limit.
+    source: { drive: Math.max(swing, 0), r: rEq + rGate, iLimit: (h + 1) * pinLimit },
   };
 }
 

@@ -26,6 +26,22 @@ export interface EdgePath {
   hfe: number | null;
   /** hFE the resistors alone would have allowed (peak of the curve), for messages. */
   hfeNominal: number | null;
+  /**
+   * The edge's gate-referred source, for models that integrate the edge over
+   * the gate-charge curve: gate current i(v) = min(iLimit, (drive − |v − v0|)/r)
+   * where v0 is the gate level the edge starts from (vLow for turn-on, vHigh
+   * for turn-off) and drive the volts across the path at the start of the edge.
+   */
+  source: GateSource;
+}
+
+export interface GateSource {
+  /** Volts across the whole path at the start of the edge (full swing, less any steering-diode offset). */
+  drive: number;
+  /** Series resistance of the path as the gate sees it, Ω (Rg(int)/count included). */
+  r: number;
+  /** Current ceiling of the source, A (∞ when none). */
+  iLimit: number;
 }
 
 /** Energy per cycle = volts × ΔQ, burnt in a part beyond the resistive split. */
@@ -147,11 +163,11 @@ export function seriesEdge(
   if (limited) shares[0].fraction = Math.max(1 - (rSum - Math.max(elements[0].r, 0)) * g, 0);
   else if (rGiven <= 0 && shares.length > 0) shares[shares.length - 1].fraction = 1;
   const rTotal = limited ? Math.min(peak / Math.max(iPeak, 1e-300), 1e15) : rSum;
-  return { shares, iPeak, iPlateau, rTotal, starved: false, hfe: null, hfeNominal: null };
+  return { shares, iPeak, iPlateau, rTotal, starved: false, hfe: null, hfeNominal: null, source: { drive: peak, r: rSum, iLimit: limit } };
 }
 
 export const NO_LIMIT = Number.POSITIVE_INFINITY;
 
 export function zeroEdge(): EdgePath {
-  return { shares: [], iPeak: 0, iPlateau: 0, rTotal: 0, starved: false, hfe: null, hfeNominal: null };
+  return { shares: [], iPeak: 0, iPlateau: 0, rTotal: 0, starved: false, hfe: null, hfeNominal: null, source: { drive: 0, r: 1e-6, iLimit: 0 } };
 }
