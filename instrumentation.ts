@@ -10,7 +10,7 @@ export async function register(): Promise<void> {
     // Not awaited: a database that is not up yet must not stop the server;
     // the workers start on the first success. JOB_WORKERS=off disables them.
     if (process.env.JOB_WORKERS !== "off") {
-      const { startJobWorkers } = await import("./app/_lib/jobs");
+      const { startJobWorkers } = await import("./services/jobs/queue");
       const start = (attempt: number): void => {
         startJobWorkers().catch((e) => {
           console.error(`job workers did not start (attempt ${attempt}):`, e);

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { PATH_HEADER, WORKSPACE_PATH_PREFIXES, nextPathProblem, signInPath } from "@/app/_lib/paths";
-import { SESSION_COOKIE } from "@/app/_lib/session-cookie";
+import { PATH_HEADER, WORKSPACE_PATH_PREFIXES, nextPathProblem, signInPath } from "@/lib/paths";
+import { SESSION_COOKIE } from "@/lib/session-cookie";
 
 // Coarse work only; every page, handler and action checks access itself.
 // - Refuses (400, naming the parameter) query strings a page could not use

@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import { getSignedInContext, requirePageMember } from "@/app/_lib/access";
-import { devInboxEnabled } from "@/app/_lib/accounts/dev-inbox";
+import { devInboxEnabled } from "@/services/mail/dev-inbox";
 import { AppShell } from "@/components/shell/AppShell";
 
 // Every workspace page renders inside the shell, for a signed-in member only.

@@ -2,11 +2,11 @@ import "server-only";
 import { cookies, headers } from "next/headers";
 import { unstable_rethrow } from "next/navigation";
 import type { z } from "zod";
-import { AppError, DATABASE_UNAVAILABLE_MESSAGE, databaseErrorSummary, isDatabaseUnavailable } from "./errors";
-import { can, type Permission } from "./roles";
-import { SESSION_COOKIE, setSessionCookie } from "./auth";
-import { resolveSession, type Member } from "./member";
-import type { ActionState } from "./action-state";
+import { AppError, DATABASE_UNAVAILABLE_MESSAGE, databaseErrorSummary, isDatabaseUnavailable } from "@/lib/errors";
+import { can, type Permission } from "@/lib/roles";
+import { SESSION_COOKIE, setSessionCookie } from "@/services/auth/session";
+import { resolveSession, type Member } from "@/services/auth/member";
+import type { ActionState } from "@/lib/action-state";
 import { echoesSecret, fieldErrorsOf, originAllowed, refuseUnstorableText, secretValuesOf, zodIssues } from "./request-guards";
 
 // action(): the wrapper every server action goes through, for use with

@@ -2,11 +2,11 @@ import "server-only";
 import type { NextRequest } from "next/server";
 import { unstable_rethrow } from "next/navigation";
 import type { z } from "zod";
-import { AppError, DATABASE_RETRY_AFTER_S, DATABASE_UNAVAILABLE_MESSAGE, databaseErrorSummary, isDatabaseUnavailable } from "./errors";
-import { can, type Permission } from "./roles";
-import { SESSION_COOKIE, setSessionCookie } from "./auth";
-import { resolveSession, type Member } from "./member";
-import { resolveBearer } from "./api-tokens";
+import { AppError, DATABASE_RETRY_AFTER_S, DATABASE_UNAVAILABLE_MESSAGE, databaseErrorSummary, isDatabaseUnavailable } from "@/lib/errors";
+import { can, type Permission } from "@/lib/roles";
+import { SESSION_COOKIE, setSessionCookie } from "@/services/auth/session";
+import { resolveSession, type Member } from "@/services/auth/member";
+import { resolveBearer } from "@/services/tokens/service";
 import { echoesSecret, originAllowed, parseWith, readBody, refuseUnstorableText, secretValuesOf } from "./request-guards";
 
 // route(): the wrapper every route handler goes through. Order: origin

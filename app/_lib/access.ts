@@ -2,11 +2,11 @@ import "server-only";
 import { cache } from "react";
 import { cookies, headers } from "next/headers";
 import { forbidden, notFound, redirect } from "next/navigation";
-import { AppError } from "./errors";
-import { can, type Permission } from "./roles";
-import { SESSION_COOKIE } from "./auth";
-import { resolveSession, type Member, type SignedInContext } from "./member";
-import { PATH_HEADER, safeNextPath, signInPath } from "./paths";
+import { AppError } from "@/lib/errors";
+import { can, type Permission } from "@/lib/roles";
+import { SESSION_COOKIE } from "@/services/auth/session";
+import { resolveSession, type Member, type SignedInContext } from "@/services/auth/member";
+import { PATH_HEADER, safeNextPath, signInPath } from "@/lib/paths";
 
 // THE access contract. Every page, route handler and server action asks here
 // who is calling and whether their role allows it:
@@ -21,8 +21,8 @@ import { PATH_HEADER, safeNextPath, signInPath } from "./paths";
 // request) and filters by it. A record of another workspace is therefore
 // simply not found, and loadInWorkspace answers 404, not 403, so callers
 // cannot learn that the id exists elsewhere.
-export type { Member, SignedInContext } from "./member";
-export type { ActionState } from "./action-state";
+export type { Member, SignedInContext } from "@/services/auth/member";
+export type { ActionState } from "@/lib/action-state";
 export { route, publicRoute, reply, type RouteCtx, type PublicRouteCtx } from "./access-route";
 export { action, publicAction } from "./access-action";
 

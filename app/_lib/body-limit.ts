@@ -1,5 +1,5 @@
 import "server-only";
-import { AppError } from "./errors";
+import { AppError } from "@/lib/errors";
 
 // Every request body is read through here: counted while it streams in, and
 // refused (413) as soon as it passes its limit, before more of it is held in

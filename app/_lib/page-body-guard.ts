@@ -9,9 +9,10 @@
 // touched: route() and the upload routes enforce their own limits while the
 // body streams (app/_lib/body-limit.ts).
 import http from "node:http";
+import { MAX_JSON_BODY_BYTES } from "@/lib/limits";
 
 /** The same bound as next.config.mjs's serverActions.bodySizeLimit ("256kb") and route() bodies. */
-export const PAGE_BODY_LIMIT_BYTES = 256 * 1024;
+export const PAGE_BODY_LIMIT_BYTES = MAX_JSON_BODY_BYTES;
 
 const marker = Symbol.for("heatsplit.pageBodyGuardInstalled");
 

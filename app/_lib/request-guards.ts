@@ -1,13 +1,12 @@
 import "server-only";
 import type { z } from "zod";
-import { AppError, type FieldIssue } from "./errors";
+import { AppError, type FieldIssue } from "@/lib/errors";
+import { MAX_JSON_BODY_BYTES } from "@/lib/limits";
 import { readFormLimited, readTextLimited } from "./body-limit";
 
 // Checks shared by the route() and action() wrappers in access.ts.
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
-/** Largest body a route accepts through route() (policy; uploads get their own limit and route). */
-export const MAX_JSON_BODY_BYTES = 256 * 1024;
 
 export function appOrigin(): string {
   return process.env.APP_ORIGIN ?? "http://127.0.0.1:3000";

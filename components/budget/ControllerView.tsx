@@ -1,6 +1,6 @@
 import type { Evaluation } from "@/models/evaluate";
 import { MarginBar, Quantity, StatusBadge, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
-import { MECHANISM_COLOURS } from "@/components/charts/palette";
+import { MECHANISM_COLOURS } from "@/lib/palette";
 import { controllerByCorner, type ControllerSplit } from "./shape";
 
 export interface OptionControllerSummary {

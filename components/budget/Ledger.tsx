@@ -1,6 +1,6 @@
 import type { CornerResult } from "@/models/evaluate";
 import { Quantity, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
-import { MECHANISM_LABELS } from "@/components/charts/palette";
+import { MECHANISM_LABELS } from "@/lib/palette";
 import { LOSS_MECHANISMS } from "@/models/losses";
 
 /**

@@ -1,8 +1,8 @@
 "use client";
 
 import { ResponsiveBar, type BarTooltipProps } from "@nivo/bar";
-import { formatSi } from "@/components/ui/format";
-import { CHART_THEME } from "./palette";
+import { formatSi } from "@/lib/format";
+import { CHART_THEME } from "@/lib/palette";
 
 /** One option: its margins to the derated limits, K (negative = over). */
 export type ComparisonRow = { option: string; label: string; controllerMargin: number; hottestMargin: number; hottestPart: string };

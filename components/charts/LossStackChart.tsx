@@ -1,8 +1,8 @@
 "use client";
 
 import { ResponsiveBar, type BarTooltipProps } from "@nivo/bar";
-import { formatSi } from "@/components/ui/format";
-import { CHART_THEME, MECHANISM_COLOURS, MECHANISM_LABELS, type LossMechanism } from "./palette";
+import { formatSi } from "@/lib/format";
+import { CHART_THEME, MECHANISM_COLOURS, MECHANISM_LABELS, type LossMechanism } from "@/lib/palette";
 
 /** One bar: a part and its loss by mechanism, W. */
 export type LossBarRow = { part: string; label: string; total: number } & Partial<Record<LossMechanism, number>>;

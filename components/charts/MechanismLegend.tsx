@@ -1,4 +1,4 @@
-import { MECHANISM_COLOURS, MECHANISM_LABELS, type LossMechanism } from "./palette";
+import { MECHANISM_COLOURS, MECHANISM_LABELS, type LossMechanism } from "@/lib/palette";
 
 /** The colour key of the loss stack, as plain HTML (no chart library). */
 export function MechanismLegend({ keys }: { keys: readonly LossMechanism[] }) {

@@ -1,8 +1,8 @@
 "use client";
 
 import { ResponsiveHeatMap, type CustomLayerProps, type TooltipProps } from "@nivo/heatmap";
-import { formatSi } from "@/components/ui/format";
-import { CHART_THEME, RISE_RAMP } from "./palette";
+import { formatSi } from "@/lib/format";
+import { CHART_THEME, RISE_RAMP } from "@/lib/palette";
 import { centreScale, contourPath, rampInterpolator, thinTicks, type Point } from "./geometry";
 
 export interface HeatmapAxis {

@@ -1,7 +1,7 @@
 "use client";
 import useSWR from "swr";
-import { getJson } from "@/app/(workspace)/projects/_components/fetchJson";
-import type { PublicJob } from "@/app/_lib/jobs/view";
+import { getJson } from "@/lib/api-client";
+import type { PublicJob } from "@/lib/jobs/schema";
 
 /** Polls a background job once a second until it ends; shows a progress bar, then the outcome. */
 export function JobProgress({ jobId, label }: { jobId: string; label: string }) {

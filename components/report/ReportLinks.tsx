@@ -1,7 +1,7 @@
 "use client";
 import { useState } from "react";
-import { ApiError, fetchJson } from "@/app/(workspace)/projects/_components/fetchJson";
-import type { PublicJob } from "@/app/_lib/jobs/view";
+import { ApiError, fetchJson } from "@/lib/api-client";
+import type { PublicJob } from "@/lib/jobs/schema";
 import { buttonClasses } from "@/components/ui/Button";
 import { JobProgress } from "./JobProgress";
 

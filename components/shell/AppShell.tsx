@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
-import { can, type Role } from "@/app/_lib/roles";
+import { can, type Role } from "@/lib/roles";
 import { ROLE_LABELS } from "@/components/ui/Badge";
 import { Caution } from "@/components/ui/Caution";
 import { Wordmark } from "./Mark";

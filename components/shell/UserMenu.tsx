@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 import { RoleBadge } from "@/components/ui/Badge";
 import { Disclosure } from "./Disclosure";
 

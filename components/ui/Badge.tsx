@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 import { cx } from "./cx";
 
 export type BadgeTone = "neutral" | "copper" | "info" | "ok" | "close" | "over";

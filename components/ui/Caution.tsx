@@ -1,11 +1,7 @@
+import { CAUTION_BENCH, CAUTION_HOT, CAUTION_MAINS, CAUTION_TEXT } from "@/lib/cautions";
 import { cx } from "./cx";
 
-// The standard cautions, word for word; reports and exports reuse these.
-export const CAUTION_BENCH = "Estimates, not measurements: confirm on the bench (thermocouple or IR) before release.";
-export const CAUTION_MAINS =
-  "Mains-connected supplies carry lethal voltages; isolation, creepage and safety approvals follow the applicable standards, local codes and licensed practice.";
-export const CAUTION_HOT = "Hot surfaces can burn.";
-export const CAUTION_TEXT = `${CAUTION_BENCH} ${CAUTION_MAINS} ${CAUTION_HOT}`;
+export { CAUTION_BENCH, CAUTION_HOT, CAUTION_MAINS, CAUTION_TEXT };
 
 function CautionMark({ className }: { className?: string }) {
   // A tilted amber tile with a bar and a dot: plain, and not a copy of a

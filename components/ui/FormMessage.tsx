@@ -1,5 +1,5 @@
 import type { ReactNode } from "react";
-import type { ActionState } from "@/app/_lib/action-state";
+import type { ActionState } from "@/lib/action-state";
 import { cx } from "./cx";
 
 export type FormMessageTone = "success" | "error";

@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { STATUS_LABELS, StatusGlyph, type Status } from "./Badge";
 import { cx } from "./cx";
-import { formatSi } from "./format";
+import { formatSi } from "@/lib/format";
 
 export interface MarginBarProps {
   /** Junction temperature at the corner shown, °C. */

@@ -1,5 +1,5 @@
 import { cx } from "./cx";
-import { siParts } from "./format";
+import { siParts } from "@/lib/format";
 
 export interface QuantityProps {
   /** In base SI units (C, W, s, Ω); temperatures in °C, differences in K. */

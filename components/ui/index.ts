@@ -1,5 +1,5 @@
 export { cx } from "./cx";
-export { formatSi, siParts, UNIT_SPACE, MINUS, NO_VALUE, type SiParts } from "./format";
+export { formatSi, siParts, UNIT_SPACE, MINUS, NO_VALUE, type SiParts } from "@/lib/format";
 export { Button, LinkButton, buttonClasses, type ButtonProps, type LinkButtonProps, type ButtonVariant, type ButtonSize } from "./Button";
 export { SubmitButton, type SubmitButtonProps } from "./SubmitButton";
 export {

@@ -2,7 +2,7 @@ import "server-only";
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 
 // Personal API tokens. Only the SHA-256 of the secret is stored; listings
 // never carry it. A token acts for its user in its workspace with the role

@@ -1,7 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 
 // Invitations to a workspace. Only the SHA-256 of the link's token is stored.
 export interface InviteRecord {

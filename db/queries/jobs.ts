@@ -2,12 +2,12 @@ import "server-only";
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
-import type { JobKind } from "@/app/_lib/jobs/schema";
+import type { JobKind, JobStatus } from "@/lib/jobs/schema";
 
 // job_result rows: the app's record of a background job (who asked, state,
 // progress, checkpoint, result). Reads for users take the workspace id; the
 // worker reads by id alone (it acts for the row's own workspace).
-export type JobStatus = "queued" | "running" | "completed" | "failed";
+export type { JobStatus };
 
 export interface JobRecord {
   id: string;

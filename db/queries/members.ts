@@ -1,7 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 import { insertActivity } from "./activity";
 import { revokeApiTokensOfMember } from "./api-tokens";
 

@@ -2,10 +2,10 @@ import "server-only";
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
-import { AppError } from "@/app/_lib/errors";
-import type { PartKind } from "@/app/_lib/partKinds";
-import type { PartValues } from "@/app/_lib/partValues";
-import type { PartListFilter } from "@/app/(workspace)/parts/schema";
+import { AppError } from "@/lib/errors";
+import type { PartKind } from "@/lib/parts/kinds";
+import type { PartValues } from "@/lib/parts/values";
+import type { PartListFilter } from "@/lib/parts/schema";
 
 // The parts library. Every function takes the workspace id, so another
 // workspace's part is simply not found (callers answer 404).

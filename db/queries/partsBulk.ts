@@ -2,7 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import { insertActivity } from "./activity";
-import type { PartValues } from "@/app/_lib/partValues";
+import type { PartValues } from "@/lib/parts/values";
 import { newPartId } from "./parts";
 
 // Many parts at once, keyed by the natural key (workspace, mpn): the CSV

@@ -2,8 +2,8 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
-import type { ProjectListQuery, ProjectPatch, ProjectStatus, ProjectValues, Topology } from "@/app/(workspace)/projects/schema";
-import { defaultDirection } from "@/app/(workspace)/projects/schema";
+import type { ProjectListQuery, ProjectPatch, ProjectStatus, ProjectValues, Topology } from "@/lib/projects/schema";
+import { defaultDirection } from "@/lib/projects/schema";
 
 // project rows. Every function takes the workspace id, so a project of
 // another workspace is simply not found (callers answer 404).

@@ -1,7 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 
 // Workspaces and the memberships that tie users to them.
 export interface WorkspaceRecord {

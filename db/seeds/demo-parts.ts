@@ -10,8 +10,8 @@
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { demoParts, type DemoPart } from "../../models/demoParts";
-import { flattenParams, validatePartDraft, type PartDraft, type PartValues } from "../../app/_lib/partValues";
-import type { PartKind } from "../../app/_lib/partKinds";
+import { flattenParams, validatePartDraft, type PartDraft, type PartValues } from "../../lib/parts/values";
+import type { PartKind } from "../../lib/parts/kinds";
 
 const MAKER_BY_PREFIX: [RegExp, string][] = [
   [/^HRG-/, "Harrowgate Silicon (demo)"],

@@ -9,8 +9,8 @@
 // alone, so a second run adds nothing and never overwrites user edits.
 import type { Knex } from "knex";
 import { demoOptions } from "../../models/demo";
-import { getAt } from "../../app/(workspace)/projects/[projectId]/options/docPaths";
-import { partSlots } from "../../app/(workspace)/projects/[projectId]/options/partSlots";
+import { getAt } from "../../lib/docPaths";
+import { partSlots } from "../../lib/parts/slots";
 
 export const DEMO_PROJECT_ID = "prj_demo_hx240";
 const DEMO_AUTHOR_ID = "usr_demo_designer";

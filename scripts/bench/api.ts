@@ -14,7 +14,7 @@ import { demoOptions } from "../../models/demo";
 import { signUp } from "../load/common";
 import { parseDesign } from "../../models/schema";
 import { evaluateDesign } from "../../models/evaluate";
-import { assertFinite } from "../../app/_lib/finite";
+import { assertFinite } from "../../lib/finite";
 
 const ORIGIN = process.env.APP_ORIGIN ?? "http://127.0.0.1:3200";
 const TARGET_P95_MS = 25;

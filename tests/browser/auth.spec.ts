@@ -5,7 +5,7 @@
 // following the link from their mailbox; a member of two workspaces switches
 // between them; a crafted ?next= never leads off-site after signing in.
 import { expect, test, type Page } from "@playwright/test";
-import { ROLES, type Role } from "../../app/_lib/roles";
+import { ROLES, type Role } from "../../lib/roles";
 import { TEST_PASSWORD, addMembership, clearAddressThrottle, closeTestDb, createMember, createWorkspaceWithRoles, linkFrom, uniqueEmail, waitForMail } from "../integration/support/db";
 
 let ws: Awaited<ReturnType<typeof createWorkspaceWithRoles>>;

@@ -6,8 +6,8 @@
 // renames and archiving, part edits and deletions; a viewer's token could
 // start background jobs.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { SIGN_UPS_PER_ADDRESS } from "@/app/_lib/throttle-policy";
-import { sessionAbsoluteSeconds } from "@/app/_lib/session-cookie";
+import { SIGN_UPS_PER_ADDRESS } from "@/lib/throttle-policy";
+import { sessionAbsoluteSeconds } from "@/lib/session-cookie";
 import { Client, SESSION_COOKIE, locationPath } from "./support/http";
 import { TEST_PASSWORD, clearAddressThrottle, closeTestDb, createMember, createWorkspaceWithRoles, linkFrom, testDb, uniqueEmail, waitForMail, type TestUser } from "./support/db";
 import { createProjectWithOption, signedInClient } from "./support/projects";

@@ -13,7 +13,7 @@ import type { Client } from "./support/http";
 import { createProject, signedInClient } from "./support/projects";
 import { demoOptions } from "@/models/demo";
 import { mosfetSchema } from "@/models/schemaParts";
-import { partToModelBlock } from "@/app/_lib/partModel";
+import { partToModelBlock } from "@/lib/parts/modelBlock";
 
 const demoV2 = () => JSON.parse(JSON.stringify(demoOptions.find((o) => o.key === "driver-ic")!.input));
 

@@ -13,7 +13,7 @@
 import crypto from "node:crypto";
 import fc from "fast-check";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 import { Client, ORIGIN } from "./support/http";
 import { TEST_PASSWORD, addMembership, clearAddressThrottle, closeTestDb, createUser, createWorkspaceWithRoles, testDb, uniqueEmail } from "./support/db";
 import { sendRaw, tinyPdf, uploadDatasheet } from "./support/parts";

@@ -17,7 +17,7 @@ import { ORIGIN, type Client } from "./support/http";
 import { templateDesign } from "./support/bench";
 import { sweepGrid } from "@/models/sweep";
 import { monteCarlo } from "@/models/spread";
-import { batchSeed, mergeMonteCarlo } from "@/app/_lib/jobs/monteCarloMerge";
+import { batchSeed, mergeMonteCarlo } from "@/services/jobs/monteCarloMerge";
 
 const ROOT = path.resolve(__dirname, "../..");
 const SCHEMA = `pgboss_restart_${crypto.randomBytes(3).toString("hex")}`;
@@ -49,7 +49,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
   for (const c of children) if (c.exitCode === null) c.kill("SIGKILL");
-  const { stopJobs } = await import("@/app/_lib/jobs");
+  const { stopJobs } = await import("@/services/jobs/queue");
   await stopJobs();
   await testDb().raw(`drop schema if exists ${SCHEMA} cascade`);
   await closeTestDb();
@@ -101,7 +101,7 @@ describe("jobs through the app server", () => {
 describe("a job survives a worker restart", () => {
   it("is resumed from its checkpoint by a new worker process after the first one is killed mid-run", async () => {
     Object.assign(process.env, { JOBS_SCHEMA: SCHEMA, JOBS_EXPIRE_SECONDS: "8", JOBS_MAINTENANCE_SECONDS: "1", JOBS_RETRY_DELAY_SECONDS: "1" });
-    const { enqueueJob } = await import("@/app/_lib/jobs");
+    const { enqueueJob } = await import("@/services/jobs/queue");
     const samples = 24_000; // 12 batches of 2 000
     const queued = await enqueueJob({ workspaceId: wsA, createdBy: userId, job: { kind: "monte-carlo", payload: { optionId, revision: 1, samples, seed: 42 } } });
     // No worker works this schema yet: the job waits.

@@ -5,7 +5,7 @@ import { closeTestDb, createWorkspaceWithRoles, testDb } from "./support/db";
 import { signedInClient } from "./support/projects";
 import { createPart, getRaw, mosfetBody, pngBytes, tinyPdf, uploadDatasheet } from "./support/parts";
 import type { Client } from "./support/http";
-import { MAX_DATASHEET_BYTES } from "@/app/_lib/datasheets";
+import { MAX_DATASHEET_BYTES } from "@/lib/limits";
 
 let wsA: string;
 let designer: Client;

@@ -3,7 +3,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { closeTestDb, createWorkspaceWithRoles, testDb } from "./support/db";
 import { demoPartValues, seedDemoParts } from "@/db/seeds/demo-parts";
 import { demoParts } from "@/models/demo";
-import { PART_KINDS } from "@/app/_lib/partKinds";
+import { PART_KINDS } from "@/lib/parts/kinds";
 
 afterAll(closeTestDb);
 

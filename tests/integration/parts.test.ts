@@ -8,8 +8,8 @@ import { createPart, mosfetBody } from "./support/parts";
 import type { Client } from "./support/http";
 import { listPartsByWorkspace } from "@/db/queries/parts";
 import { upsertPartsByMpn } from "@/db/queries/partsBulk";
-import { validatePartDraft, type PartValues } from "@/app/_lib/partValues";
-import { partListQuerySchema } from "@/app/(workspace)/parts/schema";
+import { validatePartDraft, type PartValues } from "@/lib/parts/values";
+import { partListQuerySchema } from "@/lib/parts/schema";
 import { getDb } from "@/db/knex";
 
 let wsA: string;

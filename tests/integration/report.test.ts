@@ -7,11 +7,11 @@ import { PDFParse } from "pdf-parse";
 import { closeTestDb, createWorkspaceWithRoles, testDb } from "./support/db";
 import { createProjectWithOption, signedInClient } from "./support/projects";
 import { ORIGIN, type Client } from "./support/http";
-import { formatSi } from "@/components/ui/format";
-import { CAUTION_BENCH } from "@/components/ui/Caution";
+import { formatSi } from "@/lib/format";
+import { CAUTION_BENCH } from "@/lib/cautions";
 import { LOSS_MECHANISMS } from "@/models/losses";
 import type { Evaluation } from "@/models/evaluate";
-import { BUDGET_CSV_HEADER } from "@/app/_lib/report/csv";
+import { BUDGET_CSV_HEADER } from "@/services/reports/csv";
 import { groupWarnings } from "@/models/warningGroups";
 
 let designer: Client, viewer: Client, adminB: Client;

@@ -6,7 +6,7 @@ import fs from "node:fs";
 import path from "node:path";
 import crypto from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ROLES, type Role } from "@/app/_lib/roles";
+import { ROLES, type Role } from "@/lib/roles";
 import { Client, locationPath, type Reply } from "./support/http";
 import { TEST_PASSWORD, addMembership, clearAddressThrottle, closeTestDb, createUser, createWorkspaceWithRoles, testDb, uniqueEmail } from "./support/db";
 import { CALLERS, MATRIX, type ActionEntry, type CallEntry, type Caller, type Fixtures, type Outcome, type PendingEntry } from "./route-matrix";

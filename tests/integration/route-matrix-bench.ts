@@ -3,7 +3,7 @@
 // through its admin's API client. Accepting a fit writes a revision on the
 // run's base, so each caller gets a fresh option and run.
 import type { Expectation, Fixtures, MatrixEntry, Outcome } from "./route-matrix";
-import type { Permission } from "@/app/_lib/roles";
+import type { Permission } from "@/lib/roles";
 import { createProjectWithOption } from "./support/projects";
 import { readingsAround, templateDesign, toCsv, uploadBench } from "./support/bench";
 

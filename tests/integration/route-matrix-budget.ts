@@ -4,7 +4,7 @@
 // admin's API client and shared: none of these calls changes the options,
 // and recording a choice only appends a row.
 import type { Expectation, Fixtures, MatrixEntry, Outcome } from "./route-matrix";
-import type { Permission } from "@/app/_lib/roles";
+import type { Permission } from "@/lib/roles";
 import { demoOptions } from "@/models/demo";
 import { projectBody } from "./support/projects";
 

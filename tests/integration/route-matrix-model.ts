@@ -2,7 +2,7 @@
 // signed-in member may evaluate, sweep and read the schema; nothing is
 // stored, so another workspace's member gets the same answer as ours.
 import type { Expectation, MatrixEntry, Outcome } from "./route-matrix";
-import type { Permission } from "@/app/_lib/roles";
+import type { Permission } from "@/lib/roles";
 import { demoOptions } from "@/models/demo";
 
 interface Helpers {

@@ -7,7 +7,7 @@
 // parts-datasheet.test.ts cover the real uploads.
 import crypto from "node:crypto";
 import type { Caller, Expectation, Fixtures, MatrixEntry, Outcome } from "./route-matrix";
-import type { Permission } from "@/app/_lib/roles";
+import type { Permission } from "@/lib/roles";
 import { createPart, mosfetBody, tinyPdf, uploadDatasheet } from "./support/parts";
 
 interface Helpers {

@@ -4,7 +4,7 @@
 // save never turns into another's conflict. The helpers come in as
 // arguments (types only imported) so the two files do not import each other.
 import type { Expectation, Fixtures, MatrixEntry, Outcome } from "./route-matrix";
-import type { Permission } from "@/app/_lib/roles";
+import type { Permission } from "@/lib/roles";
 import { createProject, createProjectWithOption, projectBody, templateInput, TEMPLATE_KEY } from "./support/projects";
 
 const project = async (fx: Fixtures) => ({ projectId: await createProject(fx.adminOfA) });

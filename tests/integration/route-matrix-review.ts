@@ -4,7 +4,7 @@
 // Decisions need a revision submitted by someone other than the caller, so
 // a designer of workspace A is made here and submits them.
 import type { Caller, Expectation, Fixtures, MatrixEntry, Outcome } from "./route-matrix";
-import type { Permission } from "@/app/_lib/roles";
+import type { Permission } from "@/lib/roles";
 import type { Client } from "./support/http";
 import { TEST_PASSWORD, addMembership, createUser } from "./support/db";
 import { createProject, createProjectWithOption, signedInClient } from "./support/projects";

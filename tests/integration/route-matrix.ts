@@ -27,7 +27,7 @@
 //
 // Fixtures (fx) are created by the test in two fresh workspaces; extend Fixtures
 // (and makeFixtures in role-matrix.test.ts) when a new kind of record is needed.
-import { PERMISSIONS, ROLES, type Permission, type Role } from "@/app/_lib/roles";
+import { PERMISSIONS, ROLES, type Permission, type Role } from "@/lib/roles";
 import type { Client } from "./support/http";
 import { projectRoutes } from "./route-matrix-projects";
 import { partRoutes } from "./route-matrix-parts";

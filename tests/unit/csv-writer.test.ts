@@ -3,7 +3,7 @@
 // what it writes reads back cell for cell.
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { csvCell, writeCsv } from "@/app/_lib/csv";
+import { csvCell, writeCsv } from "@/lib/csv";
 
 describe("writeCsv", () => {
   it("quotes every cell, header and comment lines included, so a comma or quote cannot split a line", () => {

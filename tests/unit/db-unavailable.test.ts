@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { isDatabaseUnavailable } from "@/app/_lib/errors";
+import { isDatabaseUnavailable } from "@/lib/errors";
 
 // Errors as node-postgres, pg-pool, knex and node's net module raise them
 // when PostgreSQL is stopped, restarting or refusing connections. The

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { assertFinite } from "@/app/_lib/finite";
-import { AppError } from "@/app/_lib/errors";
+import { assertFinite } from "@/lib/finite";
+import { AppError } from "@/lib/errors";
 import { evaluateDesign } from "@/models/evaluate";
 import { parseDesign } from "@/models/schema";
 import { demoOptions } from "@/models/demo";

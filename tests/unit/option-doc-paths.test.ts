@@ -1,8 +1,8 @@
 // The editor's document plumbing: path reads and immutable writes, the
 // re-apply after a save conflict, and copying a library part into a block.
 import { describe, expect, it } from "vitest";
-import { changedPaths, getAt, reapplyEdits, reapplyFlat, setAt } from "@/app/(workspace)/projects/[projectId]/options/docPaths";
-import { applyPartBlock, partSlots } from "@/app/(workspace)/projects/[projectId]/options/partSlots";
+import { changedPaths, getAt, reapplyEdits, reapplyFlat, setAt } from "@/lib/docPaths";
+import { applyPartBlock, partSlots } from "@/lib/parts/slots";
 import { demoOptions } from "@/models/demo";
 
 const base = { name: "x", positions: [{ id: "Q1", gate: { rTurnOn: "2 Ω" }, mosfet: { qg: "40 nC", count: 2 } }], corners: [{ id: "a", vin: "36 V" }] };

@@ -1,13 +1,13 @@
 // The parts CSV and part validation as pure functions: parse, validate every
 // row, serialise, and read the export back unchanged.
 import { describe, expect, it } from "vitest";
-import { columnOfPath, parsePartsCsv, serializePartsCsv } from "@/app/_lib/partCsv";
-import { validatePartDraft } from "@/app/_lib/partValues";
-import { formatExact, parseHfeCurve, parseVoltSecond } from "@/app/_lib/partParamText";
-import { partToModelBlock } from "@/app/_lib/partModel";
+import { columnOfPath, parsePartsCsv, serializePartsCsv } from "@/lib/parts/csv";
+import { validatePartDraft } from "@/lib/parts/values";
+import { formatExact, parseHfeCurve, parseVoltSecond } from "@/lib/parts/paramText";
+import { partToModelBlock } from "@/lib/parts/modelBlock";
 import { bjtSchema, mosfetSchema } from "@/models/schemaParts";
 import { demoPartValues } from "@/db/seeds/demo-parts";
-import { PART_KINDS } from "@/app/_lib/partKinds";
+import { PART_KINDS } from "@/lib/parts/kinds";
 
 const HEAD = "kind,manufacturer,mpn,description,unit_cost_usd,param.qg,param.qgs,param.qgd,param.vth,param.vpl,param.rds25,param.rthJA";
 const GOOD = "mosfet,Acme Test,QX-1,test part,0.40,47 nC,12 nC,15 nC,2.5 V,4.6 V,12 mΩ,40 K/W";

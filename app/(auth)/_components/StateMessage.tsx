@@ -1,4 +1,4 @@
-import type { ActionState } from "@/app/_lib/action-state";
+import type { ActionState } from "@/lib/action-state";
 import { FormMessage } from "@/components/ui/FormMessage";
 
 /** The banner for an action's outcome; field errors show beside their fields. */

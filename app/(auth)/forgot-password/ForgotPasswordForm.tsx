@@ -1,6 +1,6 @@
 "use client";
 import { useActionState, useState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { TextInput } from "@/components/ui/Field";
 import { SubmitButton } from "@/components/ui/SubmitButton";
 import { StateMessage, fieldError } from "../_components/StateMessage";

@@ -1,7 +1,7 @@
 "use server";
 import { publicAction } from "@/app/_lib/access";
-import { forgotPasswordSchema } from "@/app/_lib/accounts/schemas";
-import { RESET_REQUESTED_MESSAGE, requestPasswordReset } from "@/app/_lib/accounts/password-reset";
+import { forgotPasswordSchema } from "@/lib/accounts/schema";
+import { RESET_REQUESTED_MESSAGE, requestPasswordReset } from "@/services/accounts/password-reset";
 
 // Same flow as POST /api/v1/auth/password/forgot; the same answer for every address.
 export const forgotPasswordAction = publicAction({ schema: forgotPasswordSchema }, async (input, { member }) => {

@@ -1,11 +1,11 @@
 "use client";
 import { useActionState, useEffect, useState, startTransition } from "react";
-import { IDLE, type ActionState } from "@/app/_lib/action-state";
-import { PASSWORD_MIN_LENGTH } from "@/app/_lib/password-policy";
+import { IDLE, type ActionState } from "@/lib/action-state";
+import { PASSWORD_MIN_LENGTH } from "@/lib/password-policy";
 import { TextInput } from "@/components/ui/Field";
 import { SubmitButton } from "@/components/ui/SubmitButton";
 import { ROLE_LABELS } from "@/components/ui/Badge";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 import { StateMessage, fieldError } from "../_components/StateMessage";
 import { useFragmentToken } from "../_components/useFragmentToken";
 import { acceptInviteAction, describeInviteAction } from "./actions";

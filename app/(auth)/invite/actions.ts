@@ -1,9 +1,9 @@
 "use server";
 import { redirect } from "next/navigation";
 import { publicAction } from "@/app/_lib/access";
-import { acceptInviteSchema, describeInviteSchema } from "@/app/_lib/accounts/schemas";
-import { describeInvite } from "@/app/_lib/accounts/invites";
-import { acceptInvite } from "@/app/_lib/accounts/accept-invite";
+import { acceptInviteSchema, describeInviteSchema } from "@/lib/accounts/schema";
+import { describeInvite } from "@/services/members/invites";
+import { acceptInvite } from "@/services/accounts/accept-invite";
 import { clientAddress } from "@/app/_lib/client-address";
 
 // Same flows as POST /api/v1/auth/invite/describe and /accept.

@@ -1,8 +1,8 @@
 "use client";
 import Link from "next/link";
 import { useActionState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
-import { PASSWORD_MIN_LENGTH } from "@/app/_lib/password-policy";
+import { IDLE } from "@/lib/action-state";
+import { PASSWORD_MIN_LENGTH } from "@/lib/password-policy";
 import { TextInput } from "@/components/ui/Field";
 import { SubmitButton } from "@/components/ui/SubmitButton";
 import { FormMessage } from "@/components/ui/FormMessage";

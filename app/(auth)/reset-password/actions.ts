@@ -1,7 +1,7 @@
 "use server";
 import { publicAction } from "@/app/_lib/access";
-import { resetPasswordSchema } from "@/app/_lib/accounts/schemas";
-import { resetPassword } from "@/app/_lib/accounts/password-reset";
+import { resetPasswordSchema } from "@/lib/accounts/schema";
+import { resetPassword } from "@/services/accounts/password-reset";
 
 // Same flow as POST /api/v1/auth/password/reset.
 export const resetPasswordAction = publicAction({ schema: resetPasswordSchema }, async (input) => {

@@ -1,7 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useActionState, useState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { TextInput } from "@/components/ui/Field";
 import { SubmitButton } from "@/components/ui/SubmitButton";
 import { StateMessage, fieldError } from "../_components/StateMessage";

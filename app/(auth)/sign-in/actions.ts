@@ -1,10 +1,10 @@
 "use server";
 import { redirect } from "next/navigation";
 import { publicAction } from "@/app/_lib/access";
-import { signInSchema } from "@/app/_lib/accounts/schemas";
-import { signIn } from "@/app/_lib/accounts/sign-in";
+import { signInSchema } from "@/lib/accounts/schema";
+import { signIn } from "@/services/accounts/sign-in";
 import { clientAddress } from "@/app/_lib/client-address";
-import { safeNextPath } from "@/app/_lib/paths";
+import { safeNextPath } from "@/lib/paths";
 
 // Same flow as POST /api/v1/auth/sign-in.
 export const signInAction = publicAction({ schema: signInSchema }, async (input, { headers }) => {

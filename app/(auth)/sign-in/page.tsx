@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { getSignedInContext } from "@/app/_lib/access";
-import { safeNextPath } from "@/app/_lib/paths";
+import { safeNextPath } from "@/lib/paths";
 import { Button } from "@/components/ui/Button";
 import { AuthCard } from "../_components/AuthCard";
 import { SignInForm } from "./SignInForm";

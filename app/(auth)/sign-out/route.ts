@@ -1,5 +1,5 @@
 import { publicRoute } from "@/app/_lib/access";
-import { signOut } from "@/app/_lib/accounts/sign-in";
+import { signOut } from "@/services/accounts/sign-in";
 
 // Target of the shell's plain <form method="post" action="/sign-out"> (same
 // flow as POST /api/v1/auth/sign-out). The Origin check stops other sites

@@ -1,7 +1,7 @@
 "use client";
 import { useActionState, useState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
-import { PASSWORD_MIN_LENGTH } from "@/app/_lib/password-policy";
+import { IDLE } from "@/lib/action-state";
+import { PASSWORD_MIN_LENGTH } from "@/lib/password-policy";
 import { TextInput } from "@/components/ui/Field";
 import { SubmitButton } from "@/components/ui/SubmitButton";
 import { StateMessage, fieldError } from "../_components/StateMessage";

@@ -1,8 +1,8 @@
 "use server";
 import { redirect } from "next/navigation";
 import { publicAction } from "@/app/_lib/access";
-import { confirmSignUpSchema, signUpSchema } from "@/app/_lib/accounts/schemas";
-import { SIGN_UP_REQUESTED_MESSAGE, confirmSignUp, requestSignUp } from "@/app/_lib/accounts/sign-up";
+import { confirmSignUpSchema, signUpSchema } from "@/lib/accounts/schema";
+import { SIGN_UP_REQUESTED_MESSAGE, confirmSignUp, requestSignUp } from "@/services/accounts/sign-up";
 import { clientAddress } from "@/app/_lib/client-address";
 
 // Same flows as POST /api/v1/auth/sign-up and /api/v1/auth/sign-up/confirm.

@@ -1,5 +1,5 @@
 import { requirePageMember } from "@/app/_lib/access";
-import { PERMISSIONS, can, type Permission } from "@/app/_lib/roles";
+import { PERMISSIONS, can, type Permission } from "@/lib/roles";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { Panel } from "@/components/ui/Panel";
 import { RoleBadge } from "@/components/ui/Badge";

@@ -1,7 +1,7 @@
 "use client";
 import { useActionState, useEffect, useState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
-import { ROLES, type Role } from "@/app/_lib/roles";
+import { IDLE } from "@/lib/action-state";
+import { ROLES, type Role } from "@/lib/roles";
 import { Select, TextInput } from "@/components/ui/Field";
 import { FormMessage } from "@/components/ui/FormMessage";
 import { SubmitButton } from "@/components/ui/SubmitButton";

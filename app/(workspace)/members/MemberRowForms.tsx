@@ -1,7 +1,7 @@
 "use client";
 import { useActionState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
-import type { Role } from "@/app/_lib/roles";
+import { IDLE } from "@/lib/action-state";
+import type { Role } from "@/lib/roles";
 import { SubmitButton } from "@/components/ui/SubmitButton";
 import { ROLE_OPTIONS } from "./InviteForm";
 import { changeRoleAction, removeMemberAction, revokeInviteAction } from "./actions";

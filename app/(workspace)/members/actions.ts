@@ -1,9 +1,9 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { action } from "@/app/_lib/access";
-import { changeRoleFormSchema, inviteSchema, removeMemberFormSchema, revokeInviteFormSchema } from "@/app/_lib/accounts/schemas";
-import { createInvite, revokeInvite } from "@/app/_lib/accounts/invites";
-import { changeMemberRole, removeMember } from "@/app/_lib/accounts/members";
+import { changeRoleFormSchema, inviteSchema, removeMemberFormSchema, revokeInviteFormSchema } from "@/lib/accounts/schema";
+import { createInvite, revokeInvite } from "@/services/members/invites";
+import { changeMemberRole, removeMember } from "@/services/members/service";
 import { ROLE_LABELS } from "@/components/ui/Badge";
 
 // The members page's forms; the same flows as /api/v1/invites and /api/v1/members/[userId].

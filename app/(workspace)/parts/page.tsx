@@ -1,9 +1,9 @@
 import type { Metadata } from "next";
 import { requirePageMember } from "@/app/_lib/access";
-import { can } from "@/app/_lib/roles";
+import { can } from "@/lib/roles";
 import { listPartsByWorkspace } from "@/db/queries/parts";
 import { EmptyState, FormMessage, LinkButton, PageHeader, Pagination } from "@/components/ui";
-import { FILTER_PARAMS, partListQuerySchema, searchParamsObject, type PartListFilter, type SortKey } from "./schema";
+import { FILTER_PARAMS, partListQuerySchema, searchParamsObject, type PartListFilter, type SortKey } from "@/lib/parts/schema";
 import { PartFilters } from "./_components/PartFilters";
 import { PartsTable } from "./_components/PartsTable";
 

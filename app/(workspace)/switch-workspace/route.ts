@@ -1,6 +1,6 @@
 import { route } from "@/app/_lib/access";
-import { switchWorkspaceSchema } from "@/app/_lib/accounts/schemas";
-import { switchWorkspace } from "@/app/_lib/accounts/switch-workspace";
+import { switchWorkspaceSchema } from "@/lib/accounts/schema";
+import { switchWorkspace } from "@/services/accounts/switch-workspace";
 
 // Target of the shell's workspace switcher (a plain form posting workspaceId);
 // same flow as POST /api/v1/auth/workspace. Not a member of it -> 404.

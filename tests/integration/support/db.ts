@@ -3,7 +3,7 @@
 import knexFactory, { type Knex } from "knex";
 import { hash } from "@node-rs/argon2";
 import crypto from "node:crypto";
-import type { Role } from "@/app/_lib/roles";
+import type { Role } from "@/lib/roles";
 
 let db: Knex | undefined;
 

@@ -2,7 +2,7 @@
 //   node --conditions react-server --import tsx tests/integration/support/job-worker.ts
 // (the react-server condition makes `import "server-only"` a no-op outside
 // Next). It works the queues of JOBS_SCHEMA until it is killed.
-import { startJobWorkers } from "@/app/_lib/jobs";
+import { startJobWorkers } from "@/services/jobs/queue";
 
 void (async () => {
   await startJobWorkers();

@@ -1,7 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useActionState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { SubmitButton } from "@/components/ui/SubmitButton";
 import { FormMessage } from "@/components/ui/FormMessage";
 import { StateMessage, fieldError } from "../../_components/StateMessage";

@@ -1,6 +1,6 @@
 import { notFound } from "next/navigation";
 import { requirePageMember } from "@/app/_lib/access";
-import { devInboxEnabled, listDevMailForMember } from "@/app/_lib/accounts/dev-inbox";
+import { devInboxEnabled, listDevMailForMember } from "@/services/mail/dev-inbox";
 import { appOrigin } from "@/app/_lib/request-guards";
 import { PageHeader } from "@/components/ui/PageHeader";
 import { EmptyState } from "@/components/ui/EmptyState";

@@ -1,6 +1,6 @@
-import { PART_KINDS, PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, allParamAliases } from "@/app/_lib/partKinds";
+import { PART_KINDS, PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, allParamAliases } from "@/lib/parts/kinds";
 import { DIMENSIONS } from "@/models/units";
-import { MAX_IMPORT_ROWS } from "@/app/_lib/partCsv";
+import { MAX_IMPORT_ROWS } from "@/lib/parts/csv";
 
 function example(f: (typeof PART_KIND_DEFS)["mosfet"]["fields"][number]): string {
   if (f.type === "qty") return DIMENSIONS[f.dim].example;

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import Link from "next/link";
 import { Button, FormMessage, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
-import type { ImportPreview } from "@/app/_lib/partImport";
+import type { ImportPreview } from "@/services/parts/import";
 
 type State =
   | { step: "choose" }

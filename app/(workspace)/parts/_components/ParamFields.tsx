@@ -1,7 +1,7 @@
 "use client";
 
 import { Select } from "@/components/ui";
-import { PART_KIND_DEFS, TOLERANCE_LABELS, type PartKind } from "@/app/_lib/partKinds";
+import { PART_KIND_DEFS, TOLERANCE_LABELS, type PartKind } from "@/lib/parts/kinds";
 import { DIMENSIONS } from "@/models/units";
 import { QuantityField } from "./QuantityField";
 import { normaliseParam, normaliseTolerance } from "./normalise";

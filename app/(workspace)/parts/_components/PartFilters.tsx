@@ -1,6 +1,6 @@
 import { Button, LinkButton, Select, TextInput } from "@/components/ui";
-import { PART_KINDS, PART_KIND_LABELS } from "@/app/_lib/partKinds";
-import { DEFAULT_HFE_IC, FILTER_PARAMS } from "../schema";
+import { PART_KINDS, PART_KIND_LABELS } from "@/lib/parts/kinds";
+import { DEFAULT_HFE_IC, FILTER_PARAMS } from "@/lib/parts/schema";
 
 export interface PartFiltersProps {
   /** The raw search params, so a typed "40 nC" stays as typed. */

@@ -3,8 +3,8 @@
 import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { Button, FormMessage, Select, TextInput, Textarea } from "@/components/ui";
-import { PART_KINDS, PART_KIND_LABELS, type PartKind } from "@/app/_lib/partKinds";
-import { partBodySchema } from "../schema";
+import { PART_KINDS, PART_KIND_LABELS, type PartKind } from "@/lib/parts/kinds";
+import { partBodySchema } from "@/lib/parts/schema";
 import { ParamFields } from "./ParamFields";
 import { QuantityField } from "./QuantityField";
 import { normaliseCost } from "./normalise";

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import useSWR from "swr";
 import { Badge, Button, Table, TBody, Td, Th, THead, Tr, type SortDirection } from "@/components/ui";
-import { PART_KIND_LABELS } from "@/app/_lib/partKinds";
+import { PART_KIND_LABELS } from "@/lib/parts/kinds";
 import type { PartPage } from "@/db/queries/parts";
 import { paramText, summaryOf } from "./summary";
 

@@ -1,6 +1,6 @@
-import { PART_KIND_DEFS, type PartKind } from "@/app/_lib/partKinds";
-import { formatForInput, formatPercent } from "@/app/_lib/partParamText";
-import { getPath, type PartValues } from "@/app/_lib/partValues";
+import { PART_KIND_DEFS, type PartKind } from "@/lib/parts/kinds";
+import { formatForInput, formatPercent } from "@/lib/parts/paramText";
+import { getPath, type PartValues } from "@/lib/parts/values";
 import type { PartFormValues } from "./PartForm";
 
 export function emptyFormValues(kind: PartKind = "mosfet"): PartFormValues {

@@ -4,8 +4,8 @@
  * becomes "47 nC" on blur and "47 V" in a charge field is refused there.
  */
 import { qty } from "@/models/units";
-import type { ParamField } from "@/app/_lib/partKinds";
-import { formatForInput, formatPercent, parseHfeCurve, parseVoltSecond } from "@/app/_lib/partParamText";
+import type { ParamField } from "@/lib/parts/kinds";
+import { formatForInput, formatPercent, parseHfeCurve, parseVoltSecond } from "@/lib/parts/paramText";
 
 export type Normalised = { ok: true; text: string } | { ok: false; message: string };
 

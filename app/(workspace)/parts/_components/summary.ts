@@ -1,6 +1,6 @@
-import { PART_KIND_DEFS, fieldOf, type PartKind } from "@/app/_lib/partKinds";
-import { formatParamValue } from "@/app/_lib/partParamText";
-import { getPath, type PartParams } from "@/app/_lib/partValues";
+import { PART_KIND_DEFS, fieldOf, type PartKind } from "@/lib/parts/kinds";
+import { formatParamValue } from "@/lib/parts/paramText";
+import { getPath, type PartParams } from "@/lib/parts/values";
 
 /** The figures a table row shows per kind: what an engineer scans for first. */
 const SUMMARY_KEYS: Record<PartKind, string[]> = {

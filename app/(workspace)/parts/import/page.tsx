@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageMember } from "@/app/_lib/access";
-import { MAX_IMPORT_BYTES } from "@/app/_lib/partImport";
+import { MAX_IMPORT_BYTES } from "@/lib/limits";
 import { PageHeader } from "@/components/ui";
 import { ImportWizard } from "../_components/ImportWizard";
 import { CsvHelp } from "../_components/CsvHelp";

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageMember } from "@/app/_lib/access";
-import { isPartKind } from "@/app/_lib/partKinds";
+import { isPartKind } from "@/lib/parts/kinds";
 import { Caution, PageHeader } from "@/components/ui";
 import { PartForm } from "../_components/PartForm";
 import { emptyFormValues } from "../_components/formValues";

@@ -2,7 +2,7 @@
 
 import { useActionState } from "react";
 import { SubmitButton } from "@/components/ui";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { duplicateOptionAction } from "./actions";
 
 /** Copies the option's latest revision into a new option and opens it. */

@@ -2,8 +2,8 @@
 
 import { useActionState, useState } from "react";
 import { FormMessage, Select, SubmitButton, TextInput } from "@/components/ui";
-import { IDLE } from "@/app/_lib/action-state";
-import type { OptionTemplate } from "./options/templates";
+import { IDLE } from "@/lib/action-state";
+import type { OptionTemplate } from "@/services/options/templates";
 import { createOptionAction } from "./actions";
 
 export function NewOptionForm({ projectId, templates }: { projectId: string; templates: OptionTemplate[] }) {

@@ -6,10 +6,10 @@ import useSWR from "swr";
 import { Button, FormMessage, Panel } from "@/components/ui";
 import { formatQuantity } from "@/models/units";
 import type { ProjectRecord } from "@/db/queries/projects";
-import { projectInputSchema, STATUS_LABELS, TOPOLOGY_LABELS } from "../schema";
+import { projectInputSchema, STATUS_LABELS, TOPOLOGY_LABELS } from "@/lib/projects/schema";
 import { ProjectFields, projectFormObject } from "../_components/ProjectFields";
 import { projectFormText } from "../_components/projectText";
-import { ApiError, fetchJson, getJson, issuesByPath } from "../_components/fetchJson";
+import { ApiError, fetchJson, getJson, issuesByPath } from "@/lib/api-client";
 
 type ProjectResponse = { project: ProjectRecord };
 

@@ -2,12 +2,12 @@
 
 import { redirect } from "next/navigation";
 import { action, loadInWorkspace } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
+import { AppError } from "@/lib/errors";
 import { getProjectById } from "@/db/queries/projects";
 import { insertOptionWithFirstRevision } from "@/db/queries/options";
 import { duplicateDesignOption } from "@/db/queries/option-revisions";
-import { duplicateOptionFormSchema, optionCreateFormSchema } from "./options/schema";
-import { templateDocument } from "./options/templates";
+import { duplicateOptionFormSchema, optionCreateFormSchema } from "@/lib/options/schema";
+import { templateDocument } from "@/services/options/templates";
 
 const editorPath = (projectId: string, optionId: string) => `/projects/${projectId}/options/${optionId}`;
 

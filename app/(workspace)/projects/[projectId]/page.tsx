@@ -1,15 +1,15 @@
 import type { Metadata } from "next";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { can } from "@/app/_lib/roles";
+import { can } from "@/lib/roles";
 import { getProjectById } from "@/db/queries/projects";
 import { listOptionsByProject } from "@/db/queries/options";
 import { Badge, LinkButton, PageHeader, Panel } from "@/components/ui";
-import { STATUS_LABELS, TOPOLOGY_LABELS } from "../schema";
+import { STATUS_LABELS, TOPOLOGY_LABELS } from "@/lib/projects/schema";
 import { STATUS_TONES } from "../_components/status";
 import { ProjectDetails } from "./ProjectDetails";
 import { OptionsTable } from "./OptionsTable";
 import { NewOptionForm } from "./NewOptionForm";
-import { OPTION_TEMPLATES } from "./options/templates";
+import { OPTION_TEMPLATES } from "@/services/options/templates";
 
 export const metadata: Metadata = { title: "Project" };
 

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { Button, Select, TextInput, Textarea } from "@/components/ui";
-import { PROJECT_STATUSES, STATUS_LABELS, TOPOLOGIES, TOPOLOGY_LABELS } from "../schema";
+import { PROJECT_STATUSES, STATUS_LABELS, TOPOLOGIES, TOPOLOGY_LABELS } from "@/lib/projects/schema";
 
 /** Form text for every project field, as the inputs hold it. */
 export interface ProjectFormText {

@@ -1,5 +1,5 @@
 import { Button, LinkButton, Select, TextInput } from "@/components/ui";
-import { PROJECT_PAGE_SIZES, PROJECT_STATUSES, STATUS_LABELS, TOPOLOGIES, TOPOLOGY_LABELS, type ProjectListQuery } from "../schema";
+import { PROJECT_PAGE_SIZES, PROJECT_STATUSES, STATUS_LABELS, TOPOLOGIES, TOPOLOGY_LABELS, type ProjectListQuery } from "@/lib/projects/schema";
 
 /** A plain GET form: filters live in the URL, so a filtered list can be shared and reloaded. */
 export function ProjectFilters({ query }: { query: ProjectListQuery }) {

@@ -1,5 +1,5 @@
 import type { BadgeTone } from "@/components/ui";
-import type { ProjectStatus } from "../schema";
+import type { ProjectStatus } from "@/lib/projects/schema";
 
 export const STATUS_TONES: Record<ProjectStatus, BadgeTone> = {
   concept: "neutral",

@@ -2,7 +2,7 @@
 
 import { useActionState } from "react";
 import { FormMessage, SubmitButton } from "@/components/ui";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { EMPTY_PROJECT_TEXT, ProjectFields } from "../_components/ProjectFields";
 import { createProjectAction } from "./actions";
 

@@ -1,10 +1,10 @@
 "use client";
 import { useActionState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { PART_TYPES, type PartType } from "@/models/policy";
 import { FormMessage, SubmitButton, TextInput } from "@/components/ui";
 import { saveDeratingAction } from "./actions";
-import { PART_TYPE_LABELS } from "./schema";
+import { PART_TYPE_LABELS } from "@/lib/derating/schema";
 
 export interface DeratingFormValues {
   tjMargin: Record<PartType, string>;

@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { action } from "@/app/_lib/access";
 import { upsertDeratingByWorkspace } from "@/db/queries/derating";
-import { deratingPolicySchema } from "./schema";
+import { deratingPolicySchema } from "@/lib/derating/schema";
 
 export const saveDeratingAction = action({ permission: "derating:write", schema: deratingPolicySchema }, async (input, member) => {
   await upsertDeratingByWorkspace({ workspaceId: member.workspace.id, values: input, updatedBy: member.user.id });

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { requirePageMember } from "@/app/_lib/access";
-import { can } from "@/app/_lib/roles";
-import { MODEL_DEFAULT_DERATING } from "@/app/_lib/derating";
+import { can } from "@/lib/roles";
+import { MODEL_DEFAULT_DERATING } from "@/services/derating/policy";
 import { getDeratingByWorkspace } from "@/db/queries/derating";
 import { formatQuantity } from "@/models/units";
 import { PART_TYPES } from "@/models/policy";

@@ -1,9 +1,9 @@
 "use client";
 import { useActionState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { FormMessage, Select, SubmitButton, TextInput } from "@/components/ui";
 import { createTokenAction, revokeTokenAction } from "./actions";
-import { TOKEN_EXPIRY_CHOICES } from "./schema";
+import { TOKEN_EXPIRY_CHOICES } from "@/lib/tokens/schema";
 
 const EXPIRY_OPTIONS = TOKEN_EXPIRY_CHOICES.map((d) => ({ value: String(d), label: d === 365 ? "In a year" : `In ${d} days` }));
 

@@ -3,9 +3,9 @@
 import { revalidatePath } from "next/cache";
 import { headers } from "next/headers";
 import { action } from "@/app/_lib/access";
-import { issueApiToken, revokeOwnApiToken } from "@/app/_lib/api-tokens";
+import { issueApiToken, revokeOwnApiToken } from "@/services/tokens/service";
 import { clientAddress } from "@/app/_lib/client-address";
-import { tokenCreateSchema, tokenRevokeFormSchema } from "./schema";
+import { tokenCreateSchema, tokenRevokeFormSchema } from "@/lib/tokens/schema";
 
 // The secret goes back once, in the state of the action that made it; the
 // page never shows it again (only the SHA-256 is stored).

@@ -1,6 +1,6 @@
 import { route } from "@/app/_lib/access";
-import { MODEL_DEFAULT_DERATING } from "@/app/_lib/derating";
-import { deratingPolicySchema } from "@/app/(workspace)/settings/derating/schema";
+import { MODEL_DEFAULT_DERATING } from "@/services/derating/policy";
+import { deratingPolicySchema } from "@/lib/derating/schema";
 import { getDeratingByWorkspace, upsertDeratingByWorkspace } from "@/db/queries/derating";
 
 // The workspace derating policy (SI: margins K, fraction ratio, headroom V).

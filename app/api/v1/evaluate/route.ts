@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { route } from "@/app/_lib/access";
-import { assertFinite } from "@/app/_lib/finite";
+import { assertFinite } from "@/lib/finite";
 import { compareOptions, designInputSchema, evaluateDesign } from "@/models";
 
 // POST a design option document (unit strings or SI numbers); answers the

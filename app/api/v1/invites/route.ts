@@ -1,6 +1,6 @@
 import { reply, route } from "@/app/_lib/access";
-import { inviteSchema } from "@/app/_lib/accounts/schemas";
-import { createInvite } from "@/app/_lib/accounts/invites";
+import { inviteSchema } from "@/lib/accounts/schema";
+import { createInvite } from "@/services/members/invites";
 import { listOpenInvitesByWorkspace } from "@/db/queries/invites";
 
 // Admins list open invitations and invite by e-mail with a role.

@@ -1,8 +1,8 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { enqueueJob } from "@/app/_lib/jobs";
-import { jobCreateSchema } from "@/app/_lib/jobs/schema";
-import { publicJob } from "@/app/_lib/jobs/view";
+import { AppError } from "@/lib/errors";
+import { enqueueJob } from "@/services/jobs/queue";
+import { jobCreateSchema } from "@/lib/jobs/schema";
+import { publicJob } from "@/services/jobs/view";
 import { parseDesign } from "@/models/schema";
 import { SweepSpecError, sweepGrid } from "@/models/sweep";
 import { getRevisionByNumber } from "@/db/queries/options";

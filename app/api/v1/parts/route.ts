@@ -1,5 +1,5 @@
 import { reply, route } from "@/app/_lib/access";
-import { partBodySchema, partListQuerySchema } from "@/app/(workspace)/parts/schema";
+import { partBodySchema, partListQuerySchema } from "@/lib/parts/schema";
 import { insertPart, listPartsByWorkspace } from "@/db/queries/parts";
 
 // GET /api/v1/parts?q=&kind=&param=&min=&max=&ic=&sort=&dir=&page=&pageSize=

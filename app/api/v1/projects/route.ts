@@ -1,5 +1,5 @@
 import { reply, route } from "@/app/_lib/access";
-import { projectInputSchema, projectListQuerySchema } from "@/app/(workspace)/projects/schema";
+import { projectInputSchema, projectListQuerySchema } from "@/lib/projects/schema";
 import { insertProject, listProjectsByWorkspace } from "@/db/queries/projects";
 
 // GET /api/v1/projects?q=&status=&topology=&sort=&dir=&page=&pageSize=

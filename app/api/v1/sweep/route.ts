@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { assertFinite } from "@/app/_lib/finite";
+import { AppError } from "@/lib/errors";
+import { assertFinite } from "@/lib/finite";
 import { designInputSchema } from "@/models";
 import { sweepSpecSchema } from "@/models/sweepSchema";
 import { SweepSpecError, sweepGrid } from "@/models/sweep";

@@ -1,7 +1,7 @@
 import { reply, route } from "@/app/_lib/access";
-import { issueApiToken, requireSessionMember } from "@/app/_lib/api-tokens";
+import { issueApiToken, requireSessionMember } from "@/services/tokens/service";
 import { clientAddress } from "@/app/_lib/client-address";
-import { tokenCreateSchema } from "@/app/(workspace)/settings/tokens/schema";
+import { tokenCreateSchema } from "@/lib/tokens/schema";
 import { listApiTokensByUser } from "@/db/queries/api-tokens";
 
 // Personal API tokens of the signed-in user in the current workspace.

@@ -1,7 +1,7 @@
 "use client";
 
 import { useActionState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { FormMessage, Select, SubmitButton, Textarea } from "@/components/ui";
 import { chooseOptionAction } from "./actions";
 

@@ -3,8 +3,8 @@
 import { revalidatePath } from "next/cache";
 import { action, loadInWorkspace } from "@/app/_lib/access";
 import { getProjectById } from "@/db/queries/projects";
-import { choiceFormSchema } from "./schema";
-import { recordOptionChoice } from "./record";
+import { choiceFormSchema } from "@/lib/choice/schema";
+import { recordOptionChoice } from "@/services/choice/service";
 
 export const chooseOptionAction = action({ permission: "option:choose", schema: choiceFormSchema }, async (input, member) => {
   const project = await loadInWorkspace(member, (workspaceId) => getProjectById({ workspaceId, projectId: input.projectId }));

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { loadProjectBudgets } from "@/app/_lib/budget";
-import { can } from "@/app/_lib/roles";
+import { loadProjectBudgets } from "@/services/evaluation/budget";
+import { can } from "@/lib/roles";
 import { getProjectById } from "@/db/queries/projects";
 import { listChoicesByProject } from "@/db/queries/choices";
 import { compareOptions } from "@/models/compare";

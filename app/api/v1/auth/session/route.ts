@@ -1,5 +1,5 @@
 import { route } from "@/app/_lib/access";
-import { PERMISSIONS, can, type Permission } from "@/app/_lib/roles";
+import { PERMISSIONS, can, type Permission } from "@/lib/roles";
 import { listMembershipsByUser } from "@/db/queries/workspaces";
 
 // Who am I: user, current workspace and role, what the role allows, and the

@@ -1,6 +1,6 @@
 import { publicRoute } from "@/app/_lib/access";
-import { signInSchema } from "@/app/_lib/accounts/schemas";
-import { signIn } from "@/app/_lib/accounts/sign-in";
+import { signInSchema } from "@/lib/accounts/schema";
+import { signIn } from "@/services/accounts/sign-in";
 import { clientAddress } from "@/app/_lib/client-address";
 
 // Wrong e-mail or password -> 401 with one generic message; throttled -> 429.

@@ -1,5 +1,5 @@
 import { publicRoute } from "@/app/_lib/access";
-import { signOut } from "@/app/_lib/accounts/sign-in";
+import { signOut } from "@/services/accounts/sign-in";
 
 // Ends the session (a no-op when already signed out) and clears the cookie.
 export const POST = publicRoute({}, async () => {

@@ -1,6 +1,6 @@
 import { publicRoute, reply } from "@/app/_lib/access";
-import { signUpSchema } from "@/app/_lib/accounts/schemas";
-import { SIGN_UP_REQUESTED_MESSAGE, requestSignUp } from "@/app/_lib/accounts/sign-up";
+import { signUpSchema } from "@/lib/accounts/schema";
+import { SIGN_UP_REQUESTED_MESSAGE, requestSignUp } from "@/services/accounts/sign-up";
 import { clientAddress } from "@/app/_lib/client-address";
 
 // Starts a sign-up: 202 { message } whether or not the address has an

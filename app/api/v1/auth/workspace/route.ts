@@ -1,6 +1,6 @@
 import { route } from "@/app/_lib/access";
-import { switchWorkspaceSchema } from "@/app/_lib/accounts/schemas";
-import { switchWorkspace } from "@/app/_lib/accounts/switch-workspace";
+import { switchWorkspaceSchema } from "@/lib/accounts/schema";
+import { switchWorkspace } from "@/services/accounts/switch-workspace";
 
 // Switches the session to another workspace of the same user (404 otherwise).
 export const POST = route({ permission: "read", body: switchWorkspaceSchema }, async ({ member, body }) => {

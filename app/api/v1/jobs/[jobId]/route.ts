@@ -1,6 +1,6 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { jobParamsSchema } from "@/app/_lib/jobs/schema";
-import { publicJob } from "@/app/_lib/jobs/view";
+import { jobParamsSchema } from "@/lib/jobs/schema";
+import { publicJob } from "@/services/jobs/view";
 import { getJobResultById } from "@/db/queries/jobs";
 
 // GET /api/v1/jobs/:jobId -> { job } with status, progress 0..1, and the

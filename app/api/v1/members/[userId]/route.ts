@@ -1,6 +1,6 @@
 import { route } from "@/app/_lib/access";
-import { changeRoleSchema, memberParams } from "@/app/_lib/accounts/schemas";
-import { changeMemberRole, removeMember } from "@/app/_lib/accounts/members";
+import { changeRoleSchema, memberParams } from "@/lib/accounts/schema";
+import { changeMemberRole, removeMember } from "@/services/members/service";
 
 // Admins change a member's role or remove them; never the last admin (409).
 // A user who is not in the admin's workspace is 404.

@@ -1,6 +1,6 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { optionParamsSchema, optionPatchSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
+import { AppError } from "@/lib/errors";
+import { optionParamsSchema, optionPatchSchema } from "@/lib/options/schema";
 import { getDesignOptionById, getRevisionByNumber } from "@/db/queries/options";
 import { patchOptionLogged } from "@/db/queries/option-changes";
 

@@ -1,8 +1,8 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { validatePartDraft, flattenParams } from "@/app/_lib/partValues";
-import { removeObjectQuietly } from "@/app/_lib/datasheets";
-import { partParamsSchema, partPatchSchema } from "@/app/(workspace)/parts/schema";
+import { AppError } from "@/lib/errors";
+import { validatePartDraft, flattenParams } from "@/lib/parts/values";
+import { removeObjectQuietly } from "@/services/parts/datasheets";
+import { partParamsSchema, partPatchSchema } from "@/lib/parts/schema";
 import { deletePartById, getPartById, updatePartById } from "@/db/queries/parts";
 import { deleteStoredFileById } from "@/db/queries/files";
 import { getDb } from "@/db/knex";

@@ -1,6 +1,6 @@
 import { route } from "@/app/_lib/access";
-import { serializePartsCsv } from "@/app/_lib/partCsv";
-import { partListQuerySchema } from "@/app/(workspace)/parts/schema";
+import { serializePartsCsv } from "@/lib/parts/csv";
+import { partListQuerySchema } from "@/lib/parts/schema";
 import { listAllPartsByWorkspace } from "@/db/queries/parts";
 
 // GET /api/v1/parts/export?q=&kind=&param=&min=&max=  -> text/csv (the import format; re-imports cleanly)

@@ -1,6 +1,6 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { projectParamsSchema, projectPatchSchema, vinOrderIssues } from "@/app/(workspace)/projects/schema";
+import { AppError } from "@/lib/errors";
+import { projectParamsSchema, projectPatchSchema, vinOrderIssues } from "@/lib/projects/schema";
 import { getProjectById, updateProjectById } from "@/db/queries/projects";
 import { listOptionsByProject } from "@/db/queries/options";
 

@@ -1,7 +1,7 @@
 import { route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { revokeOwnApiToken } from "@/app/_lib/api-tokens";
-import { tokenParamsSchema } from "@/app/(workspace)/settings/tokens/schema";
+import { AppError } from "@/lib/errors";
+import { revokeOwnApiToken } from "@/services/tokens/service";
+import { tokenParamsSchema } from "@/lib/tokens/schema";
 
 // DELETE /api/v1/tokens/:tokenId -> 204; another user's token is not found (404).
 export const DELETE = route({ permission: "token:own", params: tokenParamsSchema }, async ({ member, params }) => {

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { can } from "@/app/_lib/roles";
+import { can } from "@/lib/roles";
 import { getProjectById } from "@/db/queries/projects";
 import { getDesignOptionById, getRevisionByNumber, listRevisionsByOption } from "@/db/queries/options";
 import { OptionEditor } from "./_editor/OptionEditor";

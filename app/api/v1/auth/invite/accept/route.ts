@@ -1,6 +1,6 @@
 import { publicRoute } from "@/app/_lib/access";
-import { acceptInviteSchema } from "@/app/_lib/accounts/schemas";
-import { acceptInvite } from "@/app/_lib/accounts/accept-invite";
+import { acceptInviteSchema } from "@/lib/accounts/schema";
+import { acceptInvite } from "@/services/accounts/accept-invite";
 import { clientAddress } from "@/app/_lib/client-address";
 
 // Joins the invited workspace (creating the account if needed) and signs in to it.

@@ -1,6 +1,6 @@
 import { publicRoute } from "@/app/_lib/access";
-import { forgotPasswordSchema } from "@/app/_lib/accounts/schemas";
-import { RESET_REQUESTED_MESSAGE, requestPasswordReset } from "@/app/_lib/accounts/password-reset";
+import { forgotPasswordSchema } from "@/lib/accounts/schema";
+import { RESET_REQUESTED_MESSAGE, requestPasswordReset } from "@/services/accounts/password-reset";
 
 // Same answer whether or not the address has an account.
 export const POST = publicRoute({ body: forgotPasswordSchema }, async ({ body, member }) => {

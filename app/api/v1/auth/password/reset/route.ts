@@ -1,6 +1,6 @@
 import { publicRoute } from "@/app/_lib/access";
-import { resetPasswordSchema } from "@/app/_lib/accounts/schemas";
-import { resetPassword } from "@/app/_lib/accounts/password-reset";
+import { resetPasswordSchema } from "@/lib/accounts/schema";
+import { resetPassword } from "@/services/accounts/password-reset";
 
 // Sets a new password from a reset link's token; the account is signed out everywhere.
 export const POST = publicRoute({ body: resetPasswordSchema }, async ({ body }) => {

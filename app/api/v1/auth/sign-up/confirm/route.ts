@@ -1,6 +1,6 @@
 import { publicRoute, reply } from "@/app/_lib/access";
-import { confirmSignUpSchema } from "@/app/_lib/accounts/schemas";
-import { confirmSignUp } from "@/app/_lib/accounts/sign-up";
+import { confirmSignUpSchema } from "@/lib/accounts/schema";
+import { confirmSignUp } from "@/services/accounts/sign-up";
 
 // The sign-up link's token -> 201 { user, workspace, role }: creates the
 // account and its workspace (the creator is admin) and signs in. A used,

@@ -1,7 +1,7 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { getObjectStream } from "@/app/_lib/storage";
-import { jobParamsSchema } from "@/app/_lib/jobs/schema";
+import { AppError } from "@/lib/errors";
+import { getObjectStream } from "@/services/storage/storage";
+import { jobParamsSchema } from "@/lib/jobs/schema";
 import { getJobResultById } from "@/db/queries/jobs";
 import { getStoredFileById } from "@/db/queries/files";
 

@@ -1,7 +1,7 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { loadOptionBudget } from "@/app/_lib/budget";
-import { optionParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
+import { AppError } from "@/lib/errors";
+import { loadOptionBudget } from "@/services/evaluation/budget";
+import { optionParamsSchema } from "@/lib/options/schema";
 import { getDesignOptionById } from "@/db/queries/options";
 
 // GET /api/v1/options/:optionId/budget -> { optionId, projectId, revision, evaluation }

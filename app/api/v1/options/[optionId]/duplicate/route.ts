@@ -1,5 +1,5 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
-import { duplicateOptionSchema, optionParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
+import { duplicateOptionSchema, optionParamsSchema } from "@/lib/options/schema";
 import { getDesignOptionById } from "@/db/queries/options";
 import { duplicateDesignOption } from "@/db/queries/option-revisions";
 

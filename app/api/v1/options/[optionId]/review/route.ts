@@ -1,7 +1,7 @@
 import { reply, route } from "@/app/_lib/access";
-import { loadOption, submitForReview } from "@/app/_lib/review/workflow";
-import { optionParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
-import { reviewSubmitSchema } from "@/app/(workspace)/projects/[projectId]/options/[optionId]/review/schema";
+import { loadOption, submitForReview } from "@/services/review/service";
+import { optionParamsSchema } from "@/lib/options/schema";
+import { reviewSubmitSchema } from "@/lib/review/schema";
 import { listReviewsByOption } from "@/db/queries/reviews";
 
 // GET /api/v1/options/:optionId/review -> { optionId, latestRevision, reviews } (newest revision first, with comments)

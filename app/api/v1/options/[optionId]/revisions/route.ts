@@ -1,6 +1,6 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { optionParamsSchema, revisionSaveSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
+import { AppError } from "@/lib/errors";
+import { optionParamsSchema, revisionSaveSchema } from "@/lib/options/schema";
 import { getDesignOptionById, listRevisionsByOption } from "@/db/queries/options";
 import { insertRevisionOnBase, listKnownPartIds } from "@/db/queries/option-revisions";
 

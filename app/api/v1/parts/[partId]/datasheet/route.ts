@@ -1,12 +1,12 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { MAX_DATASHEET_BYTES, MULTIPART_OVERHEAD_BYTES, replacePartDatasheet } from "@/app/_lib/datasheets";
-import { getObjectStream } from "@/app/_lib/storage";
-import { partParamsSchema } from "@/app/(workspace)/parts/schema";
+import { AppError } from "@/lib/errors";
+import { replacePartDatasheet } from "@/services/parts/datasheets";
+import { MAX_DATASHEET_BYTES } from "@/lib/limits";
+import { getObjectStream } from "@/services/storage/storage";
+import { partParamsSchema } from "@/lib/parts/schema";
 import { getPartById } from "@/db/queries/parts";
 import { getStoredFileById } from "@/db/queries/files";
-import { refuseUnstorableText } from "@/app/_lib/request-guards";
-import { readFormLimited } from "@/app/_lib/body-limit";
+import { readMultipartFile } from "@/app/_lib/uploads";
 
 // POST /api/v1/parts/:partId/datasheet (multipart field "file", a PDF up to
 // MAX_DATASHEET_BYTES) -> 201 { datasheet }; too big 413, not a PDF 415.
@@ -14,13 +14,7 @@ import { readFormLimited } from "@/app/_lib/body-limit";
 export const POST = route({ permission: "part:write", params: partParamsSchema }, async ({ member, params, req }) => {
   const part = await loadInWorkspace(member, (workspaceId) => getPartById({ workspaceId, id: params.partId }));
   const tooLarge = () => new AppError("payload_too_large", `A datasheet may be at most ${MAX_DATASHEET_BYTES / (1024 * 1024)} MB.`);
-  if (!(req.headers.get("content-type") ?? "").toLowerCase().startsWith("multipart/form-data"))
-    throw new AppError("unsupported_media_type", 'Send the PDF as the multipart form field "file".');
-  const file = (await readFormLimited(req, MAX_DATASHEET_BYTES + MULTIPART_OVERHEAD_BYTES, tooLarge)).get("file"); // the limit holds while the body streams
-  if (!(file instanceof File)) throw new AppError("bad_request", 'Attach the PDF as the form field "file".');
-  if (file.size > MAX_DATASHEET_BYTES) throw tooLarge();
-  refuseUnstorableText({ file: file.name });
-  const bytes = new Uint8Array(await file.arrayBuffer());
+  const { file, bytes } = await readMultipartFile(req, { maxBytes: MAX_DATASHEET_BYTES, tooLarge, what: "PDF" });
   const stored = await replacePartDatasheet({
     workspaceId: member.workspace.id,
     partId: part.id,

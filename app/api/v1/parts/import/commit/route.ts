@@ -1,5 +1,6 @@
 import { route } from "@/app/_lib/access";
-import { commitPartsImport, readCsvUpload } from "@/app/_lib/partImport";
+import { readCsvUpload } from "@/app/_lib/uploads";
+import { commitPartsImport } from "@/services/parts/import";
 
 // POST /api/v1/parts/import/commit  (the same file as the preview)
 //   -> { created, updated }; any problem -> 400 listing every one, nothing written.

@@ -1,5 +1,6 @@
 import { route } from "@/app/_lib/access";
-import { previewPartsImport, readCsvUpload } from "@/app/_lib/partImport";
+import { readCsvUpload } from "@/app/_lib/uploads";
+import { previewPartsImport } from "@/services/parts/import";
 
 // POST /api/v1/parts/import/preview  (body: text/csv, or multipart field "file")
 //   -> { total, valid, create, update, issues: [{ row, column, message }], rows }

@@ -1,5 +1,5 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { projectParamsSchema } from "@/app/(workspace)/projects/schema";
+import { projectParamsSchema } from "@/lib/projects/schema";
 import { getProjectById } from "@/db/queries/projects";
 import { listActivityByProject } from "@/db/queries/activity";
 

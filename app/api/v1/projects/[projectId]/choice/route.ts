@@ -1,8 +1,8 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { projectParamsSchema } from "@/app/(workspace)/projects/schema";
-import { choiceSchema } from "@/app/(workspace)/projects/[projectId]/compare/schema";
-import { recordOptionChoice } from "@/app/(workspace)/projects/[projectId]/compare/record";
+import { AppError } from "@/lib/errors";
+import { projectParamsSchema } from "@/lib/projects/schema";
+import { choiceSchema } from "@/lib/choice/schema";
+import { recordOptionChoice } from "@/services/choice/service";
 import { getProjectById } from "@/db/queries/projects";
 import { getLatestChoiceByProject, listChoicesByProject } from "@/db/queries/choices";
 

@@ -1,8 +1,8 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { projectParamsSchema } from "@/app/(workspace)/projects/schema";
-import { optionCreateSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
-import { templateDocument } from "@/app/(workspace)/projects/[projectId]/options/templates";
+import { AppError } from "@/lib/errors";
+import { projectParamsSchema } from "@/lib/projects/schema";
+import { optionCreateSchema } from "@/lib/options/schema";
+import { templateDocument } from "@/services/options/templates";
 import { getProjectById } from "@/db/queries/projects";
 import { insertOptionWithFirstRevision, listOptionsByProject } from "@/db/queries/options";
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { Button } from "@/components/ui";
-import { partSlots } from "../../partSlots";
+import { partSlots } from "@/lib/parts/slots";
 import { useEditor } from "./EditorContext";
 import { DriveSection } from "./DriveSection";
 import { FieldGrid } from "./FieldGrid";

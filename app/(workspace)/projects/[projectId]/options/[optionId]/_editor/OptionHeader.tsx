@@ -5,8 +5,8 @@ import { useRouter } from "next/navigation";
 import useSWR from "swr";
 import { Badge, Button, LinkButton, PageHeader, TextInput } from "@/components/ui";
 import type { OptionRecord } from "@/db/queries/options";
-import { optionPatchSchema } from "../../schema";
-import { fetchJson, getJson } from "../../../../_components/fetchJson";
+import { optionPatchSchema } from "@/lib/options/schema";
+import { fetchJson, getJson } from "@/lib/api-client";
 
 type OptionResponse = { option: OptionRecord };
 

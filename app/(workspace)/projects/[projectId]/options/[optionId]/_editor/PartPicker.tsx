@@ -3,11 +3,11 @@
 import { useState } from "react";
 import useSWR from "swr";
 import { Button, Select } from "@/components/ui";
-import { PART_KIND_LABELS } from "@/app/_lib/partKinds";
-import { partToModelBlock } from "@/app/_lib/partModel";
+import { PART_KIND_LABELS } from "@/lib/parts/kinds";
+import { partToModelBlock } from "@/lib/parts/modelBlock";
 import type { PartRecord } from "@/db/queries/parts";
-import { getJson } from "../../../../_components/fetchJson";
-import { applyPartBlock, type PartSlot } from "../../partSlots";
+import { getJson } from "@/lib/api-client";
+import { applyPartBlock, type PartSlot } from "@/lib/parts/slots";
 import { useEditor } from "./EditorContext";
 
 /** Parts offered per kind: the library's list limit (GET /api/v1/parts pageSize max). */

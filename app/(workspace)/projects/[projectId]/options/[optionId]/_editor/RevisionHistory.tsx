@@ -3,7 +3,7 @@
 import useSWR from "swr";
 import { Badge, Button } from "@/components/ui";
 import type { RevisionSummary } from "@/db/queries/options";
-import { getJson } from "../../../../_components/fetchJson";
+import { getJson } from "@/lib/api-client";
 
 export type RevisionList = { latestRevision: number; items: RevisionSummary[] };
 

@@ -6,7 +6,7 @@
  * would refuse.
  */
 import type { Dimension } from "@/models/units";
-import { PART_KIND_DEFS, type PartKind } from "@/app/_lib/partKinds";
+import { PART_KIND_DEFS, type PartKind } from "@/lib/parts/kinds";
 
 export type EditorField =
   | { key: string; label: string; type: "qty"; dim: Dimension; required?: boolean; hint?: string }

@@ -3,8 +3,8 @@
 import { useCallback, useMemo, useState } from "react";
 import { parseDesign } from "@/models/schema";
 import type { PartRefs } from "@/db/queries/options";
-import { ApiError, fetchJson, issuesByPath } from "../../../../_components/fetchJson";
-import { getAt, reapplyEdits, reapplyFlat, setAt } from "../../docPaths";
+import { ApiError, fetchJson, issuesByPath } from "@/lib/api-client";
+import { getAt, reapplyEdits, reapplyFlat, setAt } from "@/lib/docPaths";
 
 export interface Snapshot {
   revision: number;

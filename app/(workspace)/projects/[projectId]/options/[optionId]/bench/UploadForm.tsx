@@ -2,7 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button, FormMessage, Select } from "@/components/ui";
-import type { ApiIssue } from "@/app/(workspace)/projects/_components/fetchJson";
+import type { ApiIssue } from "@/lib/api-client";
 
 /** Posts the CSV as multipart to the bench route; row-level refusals are listed as sent back. */
 export function UploadForm({ optionId, revisions }: { optionId: string; revisions: number[] }) {

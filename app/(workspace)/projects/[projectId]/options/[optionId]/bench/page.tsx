@@ -2,13 +2,13 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { can } from "@/app/_lib/roles";
+import { can } from "@/lib/roles";
 import { getDesignOptionById, listRevisionsByOption } from "@/db/queries/options";
 import { getProjectById } from "@/db/queries/projects";
 import { listBenchRunsByOption } from "@/db/queries/bench";
 import { Caution, EmptyState, PageHeader, Panel, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
 import { CORRELATION_BAND_K } from "@/models/fit";
-import { BENCH_COLUMNS, BENCH_TEMPLATE } from "./schema";
+import { BENCH_COLUMNS, BENCH_TEMPLATE } from "@/lib/bench/schema";
 import { UploadForm } from "./UploadForm";
 
 export const metadata: Metadata = { title: "Bench correlation" };

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { loadOptionBudget, loadProjectBudgets } from "@/app/_lib/budget";
-import { can } from "@/app/_lib/roles";
+import { loadOptionBudget, loadProjectBudgets } from "@/services/evaluation/budget";
+import { can } from "@/lib/roles";
 import { getDesignOptionById } from "@/db/queries/options";
 import { getProjectById } from "@/db/queries/projects";
 import { Badge, Caution, LinkButton, PageHeader, WarningItem, WarningList } from "@/components/ui";

@@ -1,6 +1,6 @@
 "use client";
 import { useActionState } from "react";
-import { IDLE } from "@/app/_lib/action-state";
+import { IDLE } from "@/lib/action-state";
 import { FormMessage, SubmitButton, Textarea, TextInput } from "@/components/ui";
 import { decideReviewAction, submitReviewAction } from "./actions";
 

@@ -2,8 +2,8 @@
 
 import { revalidatePath } from "next/cache";
 import { action } from "@/app/_lib/access";
-import { decideReview, submitForReview } from "@/app/_lib/review/workflow";
-import { reviewDecisionFormSchema, reviewSubmitFormSchema } from "./schema";
+import { decideReview, submitForReview } from "@/services/review/service";
+import { reviewDecisionFormSchema, reviewSubmitFormSchema } from "@/lib/review/schema";
 
 const pagePath = (projectId: string, optionId: string) => `/projects/${projectId}/options/${optionId}/review`;
 

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { can } from "@/app/_lib/roles";
-import { applyWorkspaceDerating } from "@/app/_lib/derating";
+import { can } from "@/lib/roles";
+import { applyWorkspaceDerating } from "@/services/derating/policy";
 import { getDesignOptionById, getRevisionByNumber } from "@/db/queries/options";
 import { listReviewsByOption } from "@/db/queries/reviews";
 import { getDeratingByWorkspace } from "@/db/queries/derating";

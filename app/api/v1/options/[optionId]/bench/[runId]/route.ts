@@ -1,6 +1,6 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { loadRunCorrelation } from "@/app/_lib/bench/store";
-import { benchRunParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/[optionId]/bench/schema";
+import { loadRunCorrelation } from "@/services/bench/service";
+import { benchRunParamsSchema } from "@/lib/bench/schema";
 import { getBenchRunById } from "@/db/queries/bench";
 
 // GET /api/v1/options/:optionId/bench/:runId -> { run, correlation }

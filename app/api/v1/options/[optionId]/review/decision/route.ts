@@ -1,7 +1,7 @@
 import { route } from "@/app/_lib/access";
-import { decideReview } from "@/app/_lib/review/workflow";
-import { optionParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
-import { reviewDecisionSchema } from "@/app/(workspace)/projects/[projectId]/options/[optionId]/review/schema";
+import { decideReview } from "@/services/review/service";
+import { optionParamsSchema } from "@/lib/options/schema";
+import { reviewDecisionSchema } from "@/lib/review/schema";
 
 // POST /api/v1/options/:optionId/review/decision
 //   { revision, decision: "approved" | "rejected", comments: [{ body, targetPart?, targetFigure? }] } -> { review }

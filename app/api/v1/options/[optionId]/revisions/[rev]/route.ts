@@ -1,9 +1,9 @@
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { revisionParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
+import { revisionParamsSchema } from "@/lib/options/schema";
 import { getRevisionByNumber } from "@/db/queries/options";
-import { AppError } from "@/app/_lib/errors";
+import { AppError } from "@/lib/errors";
 import { updateRevisionNoteByNumber } from "@/db/queries/revision-notes";
-import { revisionNotePatchSchema } from "@/app/(workspace)/projects/[projectId]/options/[optionId]/review/schema";
+import { revisionNotePatchSchema } from "@/lib/review/schema";
 
 // GET /api/v1/options/:optionId/revisions/:rev -> { revision } (document included)
 export const GET = route({ permission: "read", params: revisionParamsSchema }, async ({ member, params }) => {

@@ -2,7 +2,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button, FormMessage, Panel } from "@/components/ui";
-import { ApiError, fetchJson } from "@/app/(workspace)/projects/_components/fetchJson";
+import { ApiError, fetchJson } from "@/lib/api-client";
 
 interface Fittable {
   id: string;

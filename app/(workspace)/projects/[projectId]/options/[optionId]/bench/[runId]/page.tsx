@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { can } from "@/app/_lib/roles";
-import { loadRunCorrelation } from "@/app/_lib/bench/store";
+import { can } from "@/lib/roles";
+import { loadRunCorrelation } from "@/services/bench/service";
 import { getDesignOptionById } from "@/db/queries/options";
 import { getProjectById } from "@/db/queries/projects";
 import { getBenchRunById } from "@/db/queries/bench";

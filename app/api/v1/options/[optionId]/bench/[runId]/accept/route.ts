@@ -1,7 +1,7 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { loadRunCorrelation } from "@/app/_lib/bench/store";
-import { acceptFitSchema, benchRunParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/[optionId]/bench/schema";
+import { AppError } from "@/lib/errors";
+import { loadRunCorrelation } from "@/services/bench/service";
+import { acceptFitSchema, benchRunParamsSchema } from "@/lib/bench/schema";
 import { parseDesign } from "@/models/schema";
 import { withDocumentValue } from "@/models/fitDesign";
 import { getBenchRunById } from "@/db/queries/bench";

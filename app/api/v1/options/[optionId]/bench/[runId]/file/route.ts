@@ -1,9 +1,9 @@
 import Papa from "papaparse";
 import { loadInWorkspace, route } from "@/app/_lib/access";
-import { AppError } from "@/app/_lib/errors";
-import { writeCsv } from "@/app/_lib/csv";
-import { getObjectStream } from "@/app/_lib/storage";
-import { benchRunParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/[optionId]/bench/schema";
+import { AppError } from "@/lib/errors";
+import { writeCsv } from "@/lib/csv";
+import { getObjectStream } from "@/services/storage/storage";
+import { benchRunParamsSchema } from "@/lib/bench/schema";
 import { getBenchRunById } from "@/db/queries/bench";
 import { getStoredFileById } from "@/db/queries/files";
 

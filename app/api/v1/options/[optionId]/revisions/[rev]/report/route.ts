@@ -1,9 +1,9 @@
 import { z } from "zod";
 import { route } from "@/app/_lib/access";
-import { loadReportData } from "@/app/_lib/report/data";
-import { renderReportPdf } from "@/app/_lib/report/pdf";
-import { budgetCsv } from "@/app/_lib/report/csv";
-import { revisionParamsSchema } from "@/app/(workspace)/projects/[projectId]/options/schema";
+import { loadReportData } from "@/services/reports/data";
+import { renderReportPdf } from "@/services/reports/pdf";
+import { budgetCsv } from "@/services/reports/csv";
+import { revisionParamsSchema } from "@/lib/options/schema";
 
 // GET /api/v1/options/:optionId/revisions/:rev/report?format=pdf|csv
 //   pdf: the design-review report (attachment); csv: every figure of the budget.
