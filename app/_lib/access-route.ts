@@ -9,15 +9,18 @@ import { resolveSession, type Member } from "@/services/auth/member";
 import { resolveBearer } from "@/services/tokens/service";
 import { echoesSecret, originAllowed, parseWith, readBody, refuseUnstorableText, secretValuesOf } from "./request-guards";
 
-// route(): the wrapper every route handler goes through. Order: origin
-// check (non-GET without an Authorization header) -> read the body within its limit (413 while it streams)
-// -> refuse NUL and lone surrogates anywhere in body or query (400) -> parse body/query/params (zod, 400; bad params 404) ->
-// authenticate (401) -> permission gate for the role (403) -> handler. The
-// handler loads records through workspace-scoped queries (404 for another
-// workspace's), applies record-level rules, acts and returns a Response or
-// a plain value (sent as JSON; undefined -> 204; reply(data, status) for
-// another status). Plain values and reply() pass the echo guard: a response
-// containing a submitted password or token is refused.
+// route(): the wrapper every route handler goes through, in one order:
+// origin check (non-GET without an Authorization header, 403) ->
+// authenticate (401) -> permission gate for the role (403) -> read the body
+// within its limit (413 while it streams) -> refuse NUL and lone surrogates
+// anywhere in body or query (400) -> parse body/query/params (zod, 400; bad
+// params 404) -> handler. A caller without the right learns nothing about
+// its input. The handler calls the feature's service (services/<feature>/),
+// which loads records through workspace-scoped queries (404 for another
+// workspace's), applies the record-level rules and acts; the handler returns
+// a Response or a plain value (sent as JSON; undefined -> 204; reply(data,
+// status) for another status). Plain values and reply() pass the echo guard:
+// a response containing a submitted password or token is refused.
 
 class JsonReply {
   constructor(
@@ -57,11 +60,14 @@ export function route<TParams = Record<string, string>, B extends Schema = undef
   opts: Opts<B, Q, P> & { permission: Permission },
   handler: (ctx: RouteCtx<P extends z.ZodType ? z.output<P> : TParams, Out<B>, Out<Q>>) => Promise<Response | unknown>,
 ): NextHandler {
-  return wrap(opts, true, (ctx) => {
-    if (!ctx.member) throw new AppError("unauthenticated", "Sign in first.");
-    if (!can(ctx.member.role, opts.permission)) throw new AppError("forbidden", "Your role does not allow this.");
-    return handler(ctx as RouteCtx<P extends z.ZodType ? z.output<P> : TParams, Out<B>, Out<Q>>);
-  });
+  const gate = (member: Member | null, signedIn: boolean) => {
+    if (!member) {
+      if (signedIn) throw new AppError("forbidden", "You are not a member of any workspace.");
+      throw new AppError("unauthenticated", "Sign in first.");
+    }
+    if (!can(member.role, opts.permission)) throw new AppError("forbidden", "Your role does not allow this.");
+  };
+  return wrap(opts, gate, handler as (ctx: PublicRouteCtx<unknown, unknown, unknown>) => Promise<unknown>);
 }
 
 /** For the signed-out flows (sign-up, sign-in, reset, invite acceptance): same checks minus the session. */
@@ -69,12 +75,12 @@ export function publicRoute<TParams = Record<string, string>, B extends Schema =
   opts: Opts<B, Q, P>,
   handler: (ctx: PublicRouteCtx<P extends z.ZodType ? z.output<P> : TParams, Out<B>, Out<Q>>) => Promise<Response | unknown>,
 ): NextHandler {
-  return wrap(opts, false, handler as (ctx: PublicRouteCtx<unknown, unknown, unknown>) => Promise<unknown>);
+  return wrap(opts, () => undefined, handler as (ctx: PublicRouteCtx<unknown, unknown, unknown>) => Promise<unknown>);
 }
 
 function wrap(
   opts: Opts<Schema, Schema, Schema>,
-  needsMember: boolean,
+  gate: (member: Member | null, signedIn: boolean) => void,
   handler: (ctx: PublicRouteCtx<unknown, unknown, unknown>) => Promise<unknown>,
 ): NextHandler {
   return async (req, { params }) => {
@@ -83,6 +89,8 @@ function wrap(
       // A bearer request carries no ambient credential (no cookie is read for
       // it), so a cross-site page cannot forge one: it skips the Origin check.
       if (!hasAuthorization(req) && !originAllowed(req.method, req.headers)) throw new AppError("forbidden", "Cross-origin request refused.");
+      const { member, signedIn } = await authenticate(req);
+      gate(member, signedIn);
       const raw = opts.body ? await readBody(req) : undefined;
       secrets = secretValuesOf(raw);
       const body = opts.body ? parseWith(opts.body, raw, "request body") : undefined;
@@ -92,11 +100,6 @@ function wrap(
       const p = await params;
       const parsedParams = opts.params ? opts.params.safeParse(p) : { success: true as const, data: p };
       if (!parsedParams.success) throw new AppError("not_found", "Not found.");
-      const { member, signedIn } = await authenticate(req);
-      if (needsMember && !member) {
-        if (signedIn) throw new AppError("forbidden", "You are not a member of any workspace.");
-        throw new AppError("unauthenticated", "Sign in first.");
-      }
       const result = await handler({ member, body, query, params: parsedParams.data, req });
       return toResponse(result, secrets, req);
     } catch (err) {

@@ -2,7 +2,6 @@ import "server-only";
 import { cache } from "react";
 import { cookies, headers } from "next/headers";
 import { forbidden, notFound, redirect } from "next/navigation";
-import { AppError } from "@/lib/errors";
 import { can, type Permission } from "@/lib/roles";
 import { SESSION_COOKIE } from "@/services/auth/session";
 import { resolveSession, type Member, type SignedInContext } from "@/services/auth/member";
@@ -25,6 +24,7 @@ export type { Member, SignedInContext } from "@/services/auth/member";
 export type { ActionState } from "@/lib/action-state";
 export { route, publicRoute, reply, type RouteCtx, type PublicRouteCtx } from "./access-route";
 export { action, publicAction } from "./access-action";
+export { loadInWorkspace } from "@/services/records";
 
 /** The signed-in user, their workspaces and current membership; cached per render. */
 // Pages cannot set cookies; none needs to: the cookie lives the session's
@@ -43,13 +43,6 @@ export async function requirePageMember(permission: Permission = "read"): Promis
   if (!member) redirect(signInPath(safeNextPath((await headers()).get(PATH_HEADER))));
   if (!can(member.role, permission)) forbidden();
   return member;
-}
-
-/** Route handlers and actions: loads through a workspace-scoped query; missing (or another workspace's) -> AppError 404. */
-export async function loadInWorkspace<T>(member: Member, load: (workspaceId: string) => Promise<T | null | undefined>): Promise<T> {
-  const record = await load(member.workspace.id);
-  if (record === null || record === undefined) throw new AppError("not_found", "Not found.");
-  return record;
 }
 
 /** Pages: the same, answering with the not-found page. */

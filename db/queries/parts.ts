@@ -2,7 +2,6 @@ import "server-only";
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
-import { AppError } from "@/lib/errors";
 import type { PartKind } from "@/lib/parts/kinds";
 import type { PartValues } from "@/lib/parts/values";
 import type { PartListFilter } from "@/lib/parts/schema";
@@ -147,23 +146,28 @@ function isUniqueViolation(e: unknown): boolean {
   return (e as { code?: string })?.code === "23505";
 }
 
-export async function insertPart({ workspaceId, userId, values }: { workspaceId: string; userId: string; values: PartValues }, db: Knex = getDb()): Promise<PartRecord> {
+/** The new part, or "duplicate_mpn" when the workspace already has that part number. */
+export async function insertPart({ workspaceId, userId, values }: { workspaceId: string; userId: string; values: PartValues }, db: Knex = getDb()): Promise<PartRecord | "duplicate_mpn"> {
   const id = newPartId();
   try {
     await db("part").insert({ id, workspace_id: workspaceId, created_by: userId, ...columnsOf(values) });
   } catch (e) {
-    if (isUniqueViolation(e)) throw new AppError("conflict", `A part ${values.mpn} is already in the library.`, [{ path: "mpn", message: "this part number is already in the library" }]);
+    if (isUniqueViolation(e)) return "duplicate_mpn";
     throw e;
   }
   return (await getPartById({ workspaceId, id }, db)) as PartRecord;
 }
 
-export async function updatePartById({ workspaceId, id, values }: { workspaceId: string; id: string; values: PartValues }, db: Knex = getDb()): Promise<PartRecord | null> {
+/** The updated part, null when not found, "duplicate_mpn" when another part has that part number. */
+export async function updatePartById(
+  { workspaceId, id, values }: { workspaceId: string; id: string; values: PartValues },
+  db: Knex = getDb(),
+): Promise<PartRecord | null | "duplicate_mpn"> {
   try {
     const n = await db("part").where({ workspace_id: workspaceId, id }).update({ ...columnsOf(values), updated_at: db.fn.now() });
     if (!n) return null;
   } catch (e) {
-    if (isUniqueViolation(e)) throw new AppError("conflict", `Another part is already numbered ${values.mpn}.`, [{ path: "mpn", message: "this part number is already in the library" }]);
+    if (isUniqueViolation(e)) return "duplicate_mpn";
     throw e;
   }
   return getPartById({ workspaceId, id }, db);

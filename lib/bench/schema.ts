@@ -47,7 +47,7 @@ export const benchRowSchema = z
 export type BenchRow = z.output<typeof benchRowSchema>;
 
 /** The upload form's fields besides the file. */
-export const benchUploadFieldsSchema = z.object({ revision: z.coerce.number().int().min(1).max(1_000_000) }).strict();
+export const benchUploadFieldsSchema = z.object({ revision: z.coerce.number().int().min(1).max(1_000_000).optional() }).strict();
 
 export const benchParamsSchema = z.object({ optionId: recordIdSchema });
 export const benchRunParamsSchema = z.object({ optionId: recordIdSchema, runId: recordIdSchema });

@@ -10,6 +10,7 @@
 import { z } from "zod";
 import { parseDesign } from "@/models/schema";
 import { upgradeDesignDocument } from "@/models/schemaUpgrade";
+import { isTemplateKey } from "./templates";
 import { recordIdSchema } from "../projects/schema";
 
 /**
@@ -52,7 +53,7 @@ const optionSummary = z.preprocess(blankToUndefined, z.string().trim().max(500).
 const optionCreateFields = {
   name: optionName,
   summary: optionSummary,
-  template: z.preprocess(blankToUndefined, z.string().max(60).optional()),
+  template: z.preprocess(blankToUndefined, z.string().max(60).refine(isTemplateKey, "no such template").optional()),
   document: designDocumentSchema.optional(),
 };
 

@@ -4,6 +4,12 @@ import { getDb } from "@/db/knex";
 import { parseDesign } from "@/models/schema";
 import { correlateBench, type BenchCorrelation } from "@/models/fitDesign";
 import { AppError } from "@/lib/errors";
+import type { Member } from "@/services/auth/member";
+import { loadInWorkspace } from "@/services/records";
+import { withDocumentValue } from "@/models/fitDesign";
+import { getDesignOptionById } from "@/db/queries/options";
+import { insertRevisionOnBase } from "@/db/queries/option-revisions";
+import { getBenchRunById } from "@/db/queries/bench";
 import { deleteObject, putObject } from "../storage/storage";
 import { parseBenchCsv } from "./csv";
 import { insertStoredFile, newFileId, newObjectKey } from "@/db/queries/files";
@@ -72,4 +78,49 @@ export async function loadRunCorrelation({ workspaceId, run }: { workspaceId: st
   if (!rev) throw new AppError("not_found", "Not found.");
   const readings = await listBenchReadingsByRun({ workspaceId, runId: run.id });
   return { run, document: rev.document, correlation: correlateBench(revisionDesign(rev.document, run.revision), readings) };
+}
+
+/** One door for POST /api/v1/options/:optionId/bench: readings against a revision (the latest when none is named). */
+export async function uploadBenchRun(member: Member, input: { optionId: string; revision?: number; filename: string | null; bytes: Uint8Array }): Promise<BenchRunRecord> {
+  const option = await loadInWorkspace(member, (workspaceId) => getDesignOptionById({ workspaceId, optionId: input.optionId }));
+  return storeBenchUpload({
+    workspaceId: member.workspace.id, optionId: option.id, revision: input.revision ?? option.latestRevision, userId: member.user.id,
+    filename: input.filename, bytes: input.bytes,
+  });
+}
+
+export interface AcceptedFit {
+  revision: number;
+  createdAt: string;
+  note: string;
+  changes: string[];
+}
+
+/**
+ * A NEW revision (base = the run's revision) whose document carries each
+ * chosen part's fitted RθJA (or RθSA of a MOSFET heatsink chain); 409 when
+ * the option moved on since the measured revision.
+ */
+export async function acceptBenchFit(member: Member, input: { optionId: string; runId: string; parts: string[]; note?: string }): Promise<AcceptedFit> {
+  const workspaceId = member.workspace.id;
+  const run = await loadInWorkspace(member, (ws) => getBenchRunById({ workspaceId: ws, optionId: input.optionId, runId: input.runId }));
+  const { document, correlation } = await loadRunCorrelation({ workspaceId, run });
+  let next = document;
+  const changes: string[] = [];
+  const issues = input.parts.flatMap((id, i) => {
+    const p = correlation.parts.find((c) => c.part.id === id);
+    if (!p?.proposal) return [{ path: `parts.${i}`, message: `no fit for "${id}" in this run` }];
+    if ("error" in p.proposal) return [{ path: `parts.${i}`, message: `${id}: ${p.proposal.error}` }];
+    next = withDocumentValue(next, p.proposal.path, p.proposal.value);
+    changes.push(`${id} ${p.proposal.path.split(".").pop()} ${Number(p.proposal.previous.toPrecision(4))} → ${Number(p.proposal.value.toPrecision(4))} K/W`);
+    return [];
+  });
+  if (issues.length) throw new AppError("bad_request", "Check the request body.", issues);
+  if (!parseDesign(next).ok) throw new AppError("bad_request", "The fitted values do not make a valid design.");
+  const base = await loadInWorkspace(member, (ws) => getRevisionByNumber({ workspaceId: ws, optionId: run.optionId, revision: run.revision }));
+  const note = (input.note ? `${input.note} (${changes.join("; ")})` : `Bench fit from run ${run.id}: ${changes.join("; ")}`).slice(0, 500);
+  const saved = await insertRevisionOnBase({ workspaceId, optionId: run.optionId, baseRevision: run.revision, document: next, partRefs: base.partRefs, note, createdBy: member.user.id });
+  if (!saved.ok && saved.reason === "not_found") throw new AppError("not_found", "Not found.");
+  if (!saved.ok) throw new AppError("conflict", `Revision ${saved.latestRevision} was saved after revision ${run.revision}, which these readings were taken against. Upload them against the latest revision.`);
+  return { revision: saved.revision, createdAt: saved.createdAt, note, changes };
 }

@@ -1,5 +1,6 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
+import type { Member } from "@/services/auth/member";
 import { parsePartsCsv, type CsvIssue } from "@/lib/parts/csv";
 import { listPartMpnsByWorkspace, upsertPartsByMpn } from "@/db/queries/partsBulk";
 
@@ -12,9 +13,9 @@ export interface ImportPreview {
   rows: { row: number; kind: string; manufacturer: string; mpn: string; action: "create" | "update" }[];
 }
 
-export async function previewPartsImport({ workspaceId, text }: { workspaceId: string; text: string }): Promise<ImportPreview> {
+export async function previewPartsImport(member: Member, { text }: { text: string }): Promise<ImportPreview> {
   const parsed = parsePartsCsv(text);
-  const existing = await listPartMpnsByWorkspace({ workspaceId, mpns: parsed.rows.map((r) => r.value.mpn) });
+  const existing = await listPartMpnsByWorkspace({ workspaceId: member.workspace.id, mpns: parsed.rows.map((r) => r.value.mpn) });
   const rows = parsed.rows.map((r) => ({
     row: r.row,
     kind: r.value.kind,
@@ -27,7 +28,7 @@ export async function previewPartsImport({ workspaceId, text }: { workspaceId: s
 }
 
 /** All rows or none: any problem anywhere in the file refuses the whole import (400 with every problem listed). */
-export async function commitPartsImport({ workspaceId, userId, text }: { workspaceId: string; userId: string; text: string }): Promise<{ created: number; updated: number }> {
+export async function commitPartsImport(member: Member, { text }: { text: string }): Promise<{ created: number; updated: number }> {
   const parsed = parsePartsCsv(text);
   if (parsed.issues.length) {
     throw new AppError(
@@ -37,5 +38,5 @@ export async function commitPartsImport({ workspaceId, userId, text }: { workspa
     );
   }
   if (!parsed.rows.length) throw new AppError("bad_request", "The file has no parts.");
-  return upsertPartsByMpn({ workspaceId, userId, rows: parsed.rows.map((r) => r.value) });
+  return upsertPartsByMpn({ workspaceId: member.workspace.id, userId: member.user.id, rows: parsed.rows.map((r) => r.value) });
 }

@@ -48,10 +48,10 @@ const WRONG_PASSWORD = "That is not the password of your account.";
  * their password again (under the sign-in throttle, so this is no way round
  * it); the secret is returned once and never stored. Logged in the activity.
  */
-export async function issueApiToken(member: Member, input: { name: string; expiresInDays: number; password: string }, address: string) {
+export async function issueApiToken(member: Member, input: { name: string; expiresInDays: number; password: string; address: string }) {
   requireSessionMember(member);
   try {
-    await checkPassword({ email: member.user.email, password: input.password, address });
+    await checkPassword({ email: member.user.email, password: input.password, address: input.address });
   } catch (err) {
     if (err instanceof AppError && err.code === "unauthenticated") throw new AppError("bad_request", WRONG_PASSWORD, [{ path: "password", message: WRONG_PASSWORD }]);
     throw err;
@@ -67,7 +67,7 @@ export async function issueApiToken(member: Member, input: { name: string; expir
 }
 
 /** Revokes one of the member's own tokens; false when they have no such token. Logged once, when it happens. */
-export async function revokeOwnApiToken(member: Member, tokenId: string): Promise<boolean> {
+export async function revokeOwnApiToken(member: Member, { tokenId }: { tokenId: string }): Promise<boolean> {
   requireSessionMember(member);
   return getDb().transaction(async (trx) => {
     const r = await revokeApiTokenById({ userId: member.user.id, workspaceId: member.workspace.id, tokenId }, trx);

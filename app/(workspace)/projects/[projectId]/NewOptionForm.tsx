@@ -3,7 +3,7 @@
 import { useActionState, useState } from "react";
 import { FormMessage, Select, SubmitButton, TextInput } from "@/components/ui";
 import { IDLE } from "@/lib/action-state";
-import type { OptionTemplate } from "@/services/options/templates";
+import type { OptionTemplate } from "@/lib/options/templates";
 import { createOptionAction } from "./actions";
 
 export function NewOptionForm({ projectId, templates }: { projectId: string; templates: OptionTemplate[] }) {

@@ -9,7 +9,7 @@ import { STATUS_TONES } from "../_components/status";
 import { ProjectDetails } from "./ProjectDetails";
 import { OptionsTable } from "./OptionsTable";
 import { NewOptionForm } from "./NewOptionForm";
-import { OPTION_TEMPLATES } from "@/services/options/templates";
+import { OPTION_TEMPLATES } from "@/lib/options/templates";
 
 export const metadata: Metadata = { title: "Project" };
 

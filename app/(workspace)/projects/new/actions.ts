@@ -2,10 +2,10 @@
 
 import { redirect } from "next/navigation";
 import { action } from "@/app/_lib/access";
-import { insertProject } from "@/db/queries/projects";
 import { projectInputSchema } from "@/lib/projects/schema";
+import { createProject } from "@/services/projects/service";
 
+// The new-project form: the same door as POST /api/v1/projects.
 export const createProjectAction = action({ permission: "project:write", schema: projectInputSchema }, async (input, member) => {
-  const project = await insertProject({ workspaceId: member.workspace.id, values: input, createdBy: member.user.id });
-  redirect(`/projects/${project.id}`);
+  redirect(`/projects/${(await createProject(member, input)).id}`);
 });

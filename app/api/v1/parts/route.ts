@@ -1,6 +1,7 @@
 import { reply, route } from "@/app/_lib/access";
 import { partBodySchema, partListQuerySchema } from "@/lib/parts/schema";
-import { insertPart, listPartsByWorkspace } from "@/db/queries/parts";
+import { listPartsByWorkspace } from "@/db/queries/parts";
+import { createPart } from "@/services/parts/service";
 
 // GET /api/v1/parts?q=&kind=&param=&min=&max=&ic=&sort=&dir=&page=&pageSize=
 //   -> { items, total, page, pageSize, pageCount }
@@ -10,7 +11,4 @@ export const GET = route({ permission: "read", query: partListQuerySchema }, asy
 
 // POST /api/v1/parts { kind, manufacturer, mpn, description?, unitCost?, params, tolerance? } -> 201 { part }
 // Quantities as unit strings ("47 nC") or SI numbers; stored as SI.
-export const POST = route({ permission: "part:write", body: partBodySchema }, async ({ member, body }) => {
-  const part = await insertPart({ workspaceId: member.workspace.id, userId: member.user.id, values: body });
-  return reply({ part }, 201);
-});
+export const POST = route({ permission: "part:write", body: partBodySchema }, async ({ member, body }) => reply({ part: await createPart(member, body) }, 201));

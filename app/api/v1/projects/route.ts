@@ -1,6 +1,7 @@
 import { reply, route } from "@/app/_lib/access";
 import { projectInputSchema, projectListQuerySchema } from "@/lib/projects/schema";
-import { insertProject, listProjectsByWorkspace } from "@/db/queries/projects";
+import { listProjectsByWorkspace } from "@/db/queries/projects";
+import { createProject } from "@/services/projects/service";
 
 // GET /api/v1/projects?q=&status=&topology=&sort=&dir=&page=&pageSize=
 export const GET = route({ permission: "read", query: projectListQuerySchema }, async ({ member, query }) => {
@@ -9,7 +10,6 @@ export const GET = route({ permission: "read", query: projectListQuerySchema }, 
 });
 
 // POST /api/v1/projects -> 201 { project }
-export const POST = route({ permission: "project:write", body: projectInputSchema }, async ({ member, body }) => {
-  const project = await insertProject({ workspaceId: member.workspace.id, values: body, createdBy: member.user.id });
-  return reply({ project }, 201);
-});
+export const POST = route({ permission: "project:write", body: projectInputSchema }, async ({ member, body }) =>
+  reply({ project: await createProject(member, body) }, 201),
+);

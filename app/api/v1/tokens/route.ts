@@ -16,6 +16,6 @@ export const GET = route({ permission: "token:own" }, async ({ member }) => {
 // POST /api/v1/tokens { name, expiresInDays (1-365), password } -> 201 { token, secret } (the secret this once)
 // A wrong password is a 400 on "password", counted by the sign-in throttle.
 export const POST = route({ permission: "token:own", body: tokenCreateSchema }, async ({ member, body, req }) => {
-  const { token, secret } = await issueApiToken(member, body, clientAddress(req.headers));
+  const { token, secret } = await issueApiToken(member, { ...body, address: clientAddress(req.headers) });
   return reply({ token, secret }, 201);
 });

@@ -1,15 +1,13 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { action, loadInWorkspace } from "@/app/_lib/access";
-import { getProjectById } from "@/db/queries/projects";
+import { action } from "@/app/_lib/access";
 import { choiceFormSchema } from "@/lib/choice/schema";
-import { recordOptionChoice } from "@/services/choice/service";
+import { chooseOption } from "@/services/choice/service";
 
+// The compare page's sign-off form: the same door as POST /api/v1/projects/:projectId/choice.
 export const chooseOptionAction = action({ permission: "option:choose", schema: choiceFormSchema }, async (input, member) => {
-  const project = await loadInWorkspace(member, (workspaceId) => getProjectById({ workspaceId, projectId: input.projectId }));
-  const result = await recordOptionChoice({ member, projectId: project.id, optionId: input.optionId, revision: input.revision, reason: input.reason });
-  if (!result.ok) return { ok: false, message: result.message, fieldErrors: Object.fromEntries(result.issues.map((i) => [i.path, i.message])) };
-  revalidatePath(`/projects/${project.id}/compare`);
-  return { ok: true, message: `Recorded: ${result.choice.optionName} (rev ${result.choice.revision}) is the chosen option.` };
+  const choice = await chooseOption(member, input);
+  revalidatePath(`/projects/${input.projectId}/compare`);
+  return { ok: true, message: `Recorded: ${choice.optionName} (rev ${choice.revision}) is the chosen option.` };
 });

@@ -1,6 +1,6 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
 import { AppError } from "@/lib/errors";
-import { replacePartDatasheet } from "@/services/parts/datasheets";
+import { attachDatasheet } from "@/services/parts/service";
 import { MAX_DATASHEET_BYTES } from "@/lib/limits";
 import { getObjectStream } from "@/services/storage/storage";
 import { partParamsSchema } from "@/lib/parts/schema";
@@ -12,17 +12,9 @@ import { readMultipartFile } from "@/app/_lib/uploads";
 // MAX_DATASHEET_BYTES) -> 201 { datasheet }; too big 413, not a PDF 415.
 // Replaces the previous datasheet.
 export const POST = route({ permission: "part:write", params: partParamsSchema }, async ({ member, params, req }) => {
-  const part = await loadInWorkspace(member, (workspaceId) => getPartById({ workspaceId, id: params.partId }));
   const tooLarge = () => new AppError("payload_too_large", `A datasheet may be at most ${MAX_DATASHEET_BYTES / (1024 * 1024)} MB.`);
   const { file, bytes } = await readMultipartFile(req, { maxBytes: MAX_DATASHEET_BYTES, tooLarge, what: "PDF" });
-  const stored = await replacePartDatasheet({
-    workspaceId: member.workspace.id,
-    partId: part.id,
-    userId: member.user.id,
-    filename: file.name,
-    bytes,
-    previousFileId: part.datasheet?.id ?? null,
-  });
+  const stored = await attachDatasheet(member, { partId: params.partId, filename: file.name, bytes });
   return reply({ datasheet: { id: stored.id, filename: stored.filename, sizeBytes: stored.sizeBytes, sha256: stored.sha256 } }, 201);
 });
 

@@ -6,6 +6,5 @@ import { commitPartsImport } from "@/services/parts/import";
 //   -> { created, updated }; any problem -> 400 listing every one, nothing written.
 // Re-importing a file updates parts by (workspace, mpn) instead of duplicating them.
 export const POST = route({ permission: "part:write" }, async ({ member, req }) => {
-  const text = await readCsvUpload(req);
-  return commitPartsImport({ workspaceId: member.workspace.id, userId: member.user.id, text });
+  return commitPartsImport(member, { text: await readCsvUpload(req) });
 });

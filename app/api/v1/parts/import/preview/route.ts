@@ -6,6 +6,5 @@ import { previewPartsImport } from "@/services/parts/import";
 //   -> { total, valid, create, update, issues: [{ row, column, message }], rows }
 // Validates every row; writes nothing.
 export const POST = route({ permission: "part:write" }, async ({ member, req }) => {
-  const text = await readCsvUpload(req);
-  return previewPartsImport({ workspaceId: member.workspace.id, text });
+  return previewPartsImport(member, { text: await readCsvUpload(req) });
 });

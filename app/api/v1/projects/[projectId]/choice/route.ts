@@ -1,8 +1,7 @@
 import { loadInWorkspace, reply, route } from "@/app/_lib/access";
-import { AppError } from "@/lib/errors";
 import { projectParamsSchema } from "@/lib/projects/schema";
 import { choiceSchema } from "@/lib/choice/schema";
-import { recordOptionChoice } from "@/services/choice/service";
+import { chooseOption } from "@/services/choice/service";
 import { getProjectById } from "@/db/queries/projects";
 import { getLatestChoiceByProject, listChoicesByProject } from "@/db/queries/choices";
 
@@ -15,9 +14,6 @@ export const GET = route({ permission: "read", params: projectParamsSchema }, as
 
 // POST /api/v1/projects/:projectId/choice { optionId, revision?, reason } -> 201 { choice }
 // Manager (or admin) only; the option must belong to the project.
-export const POST = route({ permission: "option:choose", params: projectParamsSchema, body: choiceSchema }, async ({ member, params, body }) => {
-  const project = await loadInWorkspace(member, (workspaceId) => getProjectById({ workspaceId, projectId: params.projectId }));
-  const result = await recordOptionChoice({ member, projectId: project.id, ...body });
-  if (!result.ok) throw new AppError(result.code, result.message, result.issues);
-  return reply({ choice: result.choice }, 201);
-});
+export const POST = route({ permission: "option:choose", params: projectParamsSchema, body: choiceSchema }, async ({ member, params, body }) =>
+  reply({ choice: await chooseOption(member, { projectId: params.projectId, ...body }) }, 201),
+);

@@ -1,4 +1,3 @@
-import "server-only";
 /**
  * Starting points for a new design option: the invented demo options of
  * models/demo.ts (a 36–75 V -> 12 V converter). Client-safe: the new-option
@@ -19,4 +18,8 @@ export const OPTION_TEMPLATES: OptionTemplate[] = demoOptions.map(({ key, name, 
 export function templateDocument(key: string): DesignInput | undefined {
   const t = demoOptions.find((o) => o.key === key);
   return t ? (structuredClone(t.input) as DesignInput) : undefined;
+}
+
+export function isTemplateKey(key: string): boolean {
+  return demoOptions.some((o) => o.key === key);
 }
