@@ -8,6 +8,7 @@ import crypto from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ROLES, type Role } from "@/lib/roles";
 import { Client, locationPath, type Reply } from "./support/http";
+import { callAction } from "./support/actions";
 import { TEST_PASSWORD, addMembership, clearAddressThrottle, closeTestDb, createUser, createWorkspaceWithRoles, testDb, uniqueEmail } from "./support/db";
 import { CALLERS, MATRIX, type ActionEntry, type CallEntry, type Caller, type Fixtures, type Outcome, type PendingEntry } from "./route-matrix";
 
@@ -206,4 +207,30 @@ describe("each caller gets the expected answer", () => {
     });
   }
   for (const entry of MATRIX.filter(isPending)) it.todo(`${entry.key}: ${entry.pending}`);
+});
+
+/** What the action must answer where its route answers `outcome`: success for a 2xx or 3xx, else the same status. */
+function actionExpectation(outcome: Outcome): "done" | number {
+  return typeof outcome === "number" && outcome >= 400 ? outcome : "done";
+}
+
+describe("each server action answers as the route of the same service does", () => {
+  for (const entry of MATRIX.filter(isAction)) {
+    it(entry.key, async () => {
+      const via = MATRIX.find((e): e is CallEntry => isCall(e) && e.key === entry.via);
+      if (!via) throw new Error(`${entry.key}: via "${entry.via}" is not a called entry`);
+      await clearAddressThrottle(); // sign-ups and sign-ins from loopback, twice per caller (route and form)
+      const wrong: string[] = [];
+      for (const caller of CALLERS) {
+        const client = entry.freshSession ? await freshClient(caller) : clients.get(caller)!;
+        const page = await entry.page(fx, caller);
+        const fields = entry.fields ? await entry.fields(fx, caller) : {};
+        const r = await callAction(client, { key: `app/${entry.key.slice("action ".length)}`, page, fields });
+        const expected = actionExpectation(via.expect[caller]);
+        const got = r.kind === "done" ? "done" : r.status;
+        if (got !== expected) wrong.push(`${caller}: expected ${expected}, got ${r.kind === "done" ? `done (${r.status})` : `${r.status} ${r.code}: ${r.message}`}`);
+      }
+      expect(wrong).toEqual([]);
+    });
+  }
 });

@@ -66,5 +66,10 @@ export const budgetRoutes = ({ api, page }: Helpers): MatrixEntry[] => [
     body: (fx) => ({ optionId: resolvedFixture(fx).optionIds[1], reason: "role matrix" }),
     expect: api("option:choose", 201, 404),
   },
-  { key: "action (workspace)/projects/[projectId]/compare/actions.ts#chooseOptionAction", via: "POST /api/v1/projects/[projectId]/choice" },
+  {
+    key: "action (workspace)/projects/[projectId]/compare/actions.ts#chooseOptionAction",
+    via: "POST /api/v1/projects/[projectId]/choice",
+    page: async (fx) => `/projects/${(await budgetFixture(fx)).projectId}/compare`,
+    fields: (fx) => ({ projectId: resolvedFixture(fx).projectId, optionId: resolvedFixture(fx).optionIds[1], reason: "role matrix (form)" }),
+  },
 ];

@@ -9,6 +9,13 @@ import { createProject, createProjectWithOption, projectBody, templateInput, TEM
 
 const project = async (fx: Fixtures) => ({ projectId: await createProject(fx.adminOfA) });
 const option = async (fx: Fixtures) => createProjectWithOption(fx.adminOfA);
+// The record an action's page() made, for its fields() (they run one after the other per caller).
+const pages = { project: "", option: "" };
+
+/** A JSON body as form fields: structured values as one JSON string, the rest as text. */
+function formFields(body: Record<string, unknown>): Record<string, string> {
+  return Object.fromEntries(Object.entries(body).map(([k, v]) => [k, typeof v === "object" ? JSON.stringify(v) : String(v)]));
+}
 
 interface Helpers {
   api: (permission: Permission, ok: number, otherWorkspace?: Outcome) => Expectation;
@@ -44,7 +51,26 @@ export const projectRoutes = ({ api, page }: Helpers): MatrixEntry[] => [
   { key: "POST /api/v1/options/[optionId]/duplicate", params: option, body: () => ({}), expect: api("option:write", 201, 404) },
 
   // ---- server actions, each through the route with the same flow ----
-  { key: "action (workspace)/projects/new/actions.ts#createProjectAction", via: "POST /api/v1/projects" },
-  { key: "action (workspace)/projects/[projectId]/actions.ts#createOptionAction", via: "POST /api/v1/projects/[projectId]/options" },
-  { key: "action (workspace)/projects/[projectId]/actions.ts#duplicateOptionAction", via: "POST /api/v1/options/[optionId]/duplicate" },
+  {
+    key: "action (workspace)/projects/new/actions.ts#createProjectAction",
+    via: "POST /api/v1/projects",
+    page: () => "/projects/new",
+    fields: () => formFields(projectBody({ name: "Matrix project (form)" })),
+  },
+  {
+    key: "action (workspace)/projects/[projectId]/actions.ts#createOptionAction",
+    via: "POST /api/v1/projects/[projectId]/options",
+    page: async (fx) => `/projects/${(pages.project = await createProject(fx.adminOfA))}`,
+    fields: () => ({ projectId: pages.project, name: "Matrix option (form)", template: TEMPLATE_KEY }),
+  },
+  {
+    key: "action (workspace)/projects/[projectId]/actions.ts#duplicateOptionAction",
+    via: "POST /api/v1/options/[optionId]/duplicate",
+    page: async (fx) => {
+      const o = await option(fx);
+      pages.option = o.optionId;
+      return `/projects/${o.projectId}`;
+    },
+    fields: () => ({ optionId: pages.option }),
+  },
 ];

@@ -28,12 +28,12 @@ function designerOfA(fx: Fixtures): Promise<Client> {
   return c;
 }
 
-async function submittedOption(fx: Fixtures): Promise<{ optionId: string }> {
+async function submittedOption(fx: Fixtures): Promise<{ projectId: string; optionId: string }> {
   const designer = await designerOfA(fx);
-  const { optionId } = await createProjectWithOption(designer);
+  const { projectId, optionId } = await createProjectWithOption(designer);
   const r = await designer.post(`/api/v1/options/${optionId}/review`, { revision: 1 });
   if (r.status !== 201) throw new Error(`review fixture: submit ${r.status} ${r.text}`);
-  return { optionId };
+  return { projectId, optionId };
 }
 
 /** A fresh token of A's admin: only the admin may revoke it; anyone else finds nothing. */
@@ -53,6 +53,9 @@ const DEFAULT_POLICY = {
 
 const project = async (fx: Fixtures) => ({ projectId: await createProject(fx.adminOfA) });
 const option = async (fx: Fixtures) => createProjectWithOption(fx.adminOfA);
+// The record an action's page() made, for its fields() (they run one after the other per caller).
+const forms = { option: { projectId: "", optionId: "" }, token: "" };
+const reviewPage = (o: { projectId: string; optionId: string }) => `/projects/${o.projectId}/options/${o.optionId}/review`;
 
 export const reviewRoutes = ({ api, page }: Helpers): MatrixEntry[] => [
   // ---- pages ----
@@ -88,9 +91,41 @@ export const reviewRoutes = ({ api, page }: Helpers): MatrixEntry[] => [
   { key: "DELETE /api/v1/tokens/[tokenId]", params: adminToken, expect: ownTokenOnly },
 
   // ---- server actions, each through the route with the same flow ----
-  { key: "action (workspace)/projects/[projectId]/options/[optionId]/review/actions.ts#submitReviewAction", via: "POST /api/v1/options/[optionId]/review" },
-  { key: "action (workspace)/projects/[projectId]/options/[optionId]/review/actions.ts#decideReviewAction", via: "POST /api/v1/options/[optionId]/review/decision" },
-  { key: "action (workspace)/settings/derating/actions.ts#saveDeratingAction", via: "PUT /api/v1/derating" },
-  { key: "action (workspace)/settings/tokens/actions.ts#createTokenAction", via: "POST /api/v1/tokens" },
-  { key: "action (workspace)/settings/tokens/actions.ts#revokeTokenAction", via: "DELETE /api/v1/tokens/[tokenId]" },
+  {
+    key: "action (workspace)/projects/[projectId]/options/[optionId]/review/actions.ts#submitReviewAction",
+    via: "POST /api/v1/options/[optionId]/review",
+    page: async (fx) => reviewPage((forms.option = await option(fx))),
+    fields: () => ({ optionId: forms.option.optionId, note: "matrix (form)" }),
+  },
+  {
+    key: "action (workspace)/projects/[projectId]/options/[optionId]/review/actions.ts#decideReviewAction",
+    via: "POST /api/v1/options/[optionId]/review/decision",
+    page: async (fx) => reviewPage((forms.option = await submittedOption(fx))),
+    fields: () => ({ optionId: forms.option.optionId, revision: "1", decision: "approved", body: "matrix (form)", targetPart: "Q1" }),
+  },
+  {
+    key: "action (workspace)/settings/derating/actions.ts#saveDeratingAction",
+    via: "PUT /api/v1/derating",
+    page: () => "/settings/derating",
+    fields: () => ({
+      ...Object.fromEntries(Object.entries(DEFAULT_POLICY.tjMargin).map(([k, v]) => [`tjMargin.${k}`, v])),
+      vgsMaxFraction: DEFAULT_POLICY.vgsMaxFraction,
+      minHeadroomAbovePlateau: DEFAULT_POLICY.minHeadroomAbovePlateau,
+    }),
+  },
+  {
+    key: "action (workspace)/settings/tokens/actions.ts#createTokenAction",
+    via: "POST /api/v1/tokens",
+    page: () => "/settings/tokens",
+    fields: () => ({ name: "matrix token (form)", expiresInDays: "7", password: TEST_PASSWORD }),
+  },
+  {
+    key: "action (workspace)/settings/tokens/actions.ts#revokeTokenAction",
+    via: "DELETE /api/v1/tokens/[tokenId]",
+    page: async (fx) => {
+      forms.token = (await adminToken(fx)).tokenId;
+      return "/settings/tokens";
+    },
+    fields: () => ({ id: forms.token }),
+  },
 ];

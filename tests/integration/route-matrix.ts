@@ -21,8 +21,10 @@
 //   expect   per caller: a status number, "signin" (redirect to /sign-in) or "redirect:/path".
 //            Helpers: api(permission, okStatus, otherWorkspace), page(permission), everyone(status).
 //   freshSession: true   when the call ends or replaces the caller's session (sign-in, sign-out…)
-//   An action is exercised through the route that runs the same flow: { key, via: "<route key>" }.
-//   The test checks that the action and that route declare the same permission.
+//   An action is one of two doors to the same service: { key, via: "<route key>", page, fields }.
+//   The test checks that the action and that route declare the same permission, then posts
+//   the action (as React does, to `page`, with the form `fields`) as every caller: it must
+//   succeed where the route succeeds and refuse with the route's status where it refuses.
 //   Every non-GET entry is also sent once with a foreign Origin (as A's admin): it must be 403.
 //
 // Fixtures (fx) are created by the test in two fresh workspaces; extend Fixtures
@@ -71,6 +73,11 @@ export interface ActionEntry {
   key: string;
   /** Key of the CallEntry whose route runs the same flow with the same permission. */
   via: string;
+  /** The page whose form posts the action (the action runs there). */
+  page: (fx: Fixtures, caller: Caller) => string | Promise<string>;
+  /** The form's fields, as strings; made after page(), so page() may make the records they name. */
+  fields?: (fx: Fixtures, caller: Caller) => Record<string, string> | Promise<Record<string, string>>;
+  freshSession?: boolean;
 }
 
 /** Present in app/ but not yet described; the test lists these as todo, not as passed. */
@@ -162,17 +169,59 @@ export const MATRIX: MatrixEntry[] = [
   },
 
   // ---- server actions, each through the route with the same flow ----
-  { key: "action (auth)/sign-in/actions.ts#signInAction", via: "POST /api/v1/auth/sign-in" },
-  { key: "action (auth)/sign-up/actions.ts#signUpAction", via: "POST /api/v1/auth/sign-up" },
-  { key: "action (auth)/sign-up/actions.ts#confirmSignUpAction", via: "POST /api/v1/auth/sign-up/confirm" },
-  { key: "action (auth)/forgot-password/actions.ts#forgotPasswordAction", via: "POST /api/v1/auth/password/forgot" },
-  { key: "action (auth)/reset-password/actions.ts#resetPasswordAction", via: "POST /api/v1/auth/password/reset" },
-  { key: "action (auth)/invite/actions.ts#describeInviteAction", via: "POST /api/v1/auth/invite/describe" },
-  { key: "action (auth)/invite/actions.ts#acceptInviteAction", via: "POST /api/v1/auth/invite/accept" },
-  { key: "action (workspace)/members/actions.ts#inviteMemberAction", via: "POST /api/v1/invites" },
-  { key: "action (workspace)/members/actions.ts#changeRoleAction", via: "PATCH /api/v1/members/[userId]" },
-  { key: "action (workspace)/members/actions.ts#removeMemberAction", via: "DELETE /api/v1/members/[userId]" },
-  { key: "action (workspace)/members/actions.ts#revokeInviteAction", via: "DELETE /api/v1/invites/[inviteId]" },
+  {
+    key: "action (auth)/sign-in/actions.ts#signInAction",
+    via: "POST /api/v1/auth/sign-in",
+    freshSession: true,
+    page: () => "/sign-in",
+    fields: (fx) => ({ ...fx.spareAccount, next: "/home" }),
+  },
+  {
+    key: "action (auth)/sign-up/actions.ts#signUpAction",
+    via: "POST /api/v1/auth/sign-up",
+    freshSession: true,
+    page: () => "/sign-up",
+    fields: (fx) => ({ displayName: "Matrix Signup", email: fx.uniqueEmail("matrix-signup-form"), password: "matrix sign-up password", workspaceName: "Matrix" }),
+  },
+  { key: "action (auth)/sign-up/actions.ts#confirmSignUpAction", via: "POST /api/v1/auth/sign-up/confirm", page: () => "/sign-up/confirm", fields: () => ({ token: BOGUS_TOKEN }) },
+  { key: "action (auth)/forgot-password/actions.ts#forgotPasswordAction", via: "POST /api/v1/auth/password/forgot", page: () => "/forgot-password", fields: (fx) => ({ email: fx.uniqueEmail("nobody-form") }) },
+  {
+    key: "action (auth)/reset-password/actions.ts#resetPasswordAction",
+    via: "POST /api/v1/auth/password/reset",
+    page: () => "/reset-password",
+    fields: () => ({ token: BOGUS_TOKEN, password: "a long enough password" }),
+  },
+  { key: "action (auth)/invite/actions.ts#describeInviteAction", via: "POST /api/v1/auth/invite/describe", page: () => "/invite", fields: () => ({ token: BOGUS_TOKEN }) },
+  {
+    key: "action (auth)/invite/actions.ts#acceptInviteAction",
+    via: "POST /api/v1/auth/invite/accept",
+    page: () => "/invite",
+    fields: () => ({ token: BOGUS_TOKEN, displayName: "X", password: "a long enough password" }),
+  },
+  {
+    key: "action (workspace)/members/actions.ts#inviteMemberAction",
+    via: "POST /api/v1/invites",
+    page: () => "/members",
+    fields: (fx) => ({ email: fx.uniqueEmail("matrix-invitee-form"), role: "viewer" }),
+  },
+  {
+    key: "action (workspace)/members/actions.ts#changeRoleAction",
+    via: "PATCH /api/v1/members/[userId]",
+    page: () => "/members",
+    fields: async (fx) => ({ userId: await fx.newMemberOfA("designer"), role: "viewer" }),
+  },
+  {
+    key: "action (workspace)/members/actions.ts#removeMemberAction",
+    via: "DELETE /api/v1/members/[userId]",
+    page: () => "/members",
+    fields: async (fx) => ({ userId: await fx.newMemberOfA("designer") }),
+  },
+  {
+    key: "action (workspace)/members/actions.ts#revokeInviteAction",
+    via: "DELETE /api/v1/invites/[inviteId]",
+    page: () => "/members",
+    fields: async (fx) => ({ inviteId: await fx.newInviteOfA() }),
+  },
 
   // ---- projects and design options (route-matrix-projects.ts) ----
   ...projectRoutes({ api, page }),

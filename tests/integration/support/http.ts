@@ -13,6 +13,8 @@ export interface Reply {
 export interface RequestOptions {
   json?: unknown;
   form?: Record<string, string>;
+  /** A multipart body (its boundary goes in the content type fetch sets). */
+  formData?: FormData;
   headers?: Record<string, string>;
   /** Origin header for non-GET requests; null sends none. Defaults to APP_ORIGIN. */
   origin?: string | null;
@@ -32,10 +34,12 @@ export class Client {
     if (this.cookies.size) headers.cookie = this.cookieHeader();
     const origin = opts.origin === undefined ? ORIGIN : opts.origin;
     if (method !== "GET" && method !== "HEAD" && origin) headers.origin = origin;
-    let body: string | undefined;
+    let body: string | FormData | undefined;
     if (opts.json !== undefined) {
       headers["content-type"] = "application/json";
       body = JSON.stringify(opts.json);
+    } else if (opts.formData) {
+      body = opts.formData;
     } else if (opts.form) {
       headers["content-type"] = "application/x-www-form-urlencoded";
       body = new URLSearchParams(opts.form).toString();
