@@ -1,7 +1,10 @@
 /**
- * JSON calls to /api/v1 from client components. A refusal becomes an
- * ApiError carrying the handler's code, message and field issues, so forms
- * can place the issues and the editor can tell a conflict (409) apart.
+ * THE way client components call /api/v1: JSON, a multipart form (uploads)
+ * or a CSV text body in, JSON out. A refusal becomes an ApiError carrying
+ * the handler's code, message and field issues (the one error shape of
+ * lib/errors.ts), so forms place the issues and the editor can tell a
+ * conflict (409) apart. After a change the caller refreshes what it shows
+ * with useAfterChange() (components/data/useAfterChange.ts).
  */
 export interface ApiIssue {
   path: string;
@@ -19,13 +22,25 @@ export class ApiError extends Error {
   }
 }
 
-export async function fetchJson<T>(url: string, init?: { method?: string; body?: unknown }): Promise<T> {
-  const res = await fetch(url, {
-    method: init?.method ?? "GET",
-    headers: init?.body !== undefined ? { "content-type": "application/json" } : undefined,
-    body: init?.body !== undefined ? JSON.stringify(init.body) : undefined,
-    credentials: "same-origin",
-  });
+export interface ApiRequest {
+  method?: string;
+  /** Sent as JSON. */
+  body?: unknown;
+  /** Sent as multipart/form-data (file uploads). */
+  form?: FormData;
+  /** Sent as text/csv. */
+  csv?: string;
+}
+
+function encode(init: ApiRequest | undefined): { headers?: Record<string, string>; body?: BodyInit } {
+  if (init?.form) return { body: init.form };
+  if (init?.csv !== undefined) return { headers: { "content-type": "text/csv" }, body: init.csv };
+  if (init?.body !== undefined) return { headers: { "content-type": "application/json" }, body: JSON.stringify(init.body) };
+  return {};
+}
+
+export async function fetchJson<T>(url: string, init?: ApiRequest): Promise<T> {
+  const res = await fetch(url, { method: init?.method ?? "GET", ...encode(init), credentials: "same-origin" });
   const text = await res.text();
   let data: unknown;
   try {

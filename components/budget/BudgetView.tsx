@@ -2,7 +2,8 @@
 
 import dynamic from "next/dynamic";
 import { useEffect, useMemo, useRef, useState } from "react";
-import { useRouter } from "next/navigation";
+import { ApiError, fetchJson } from "@/lib/api-client";
+import { useAfterChange } from "@/components/data/useAfterChange";
 import type { Evaluation } from "@/models/evaluate";
 import type { Design } from "@/models/schema";
 import { Badge, Caution, Panel, Quantity } from "@/components/ui";
@@ -51,7 +52,7 @@ export interface BudgetViewProps {
 
 export function BudgetView(props: BudgetViewProps) {
   const { projectId, optionId, design } = props;
-  const router = useRouter();
+  const afterChange = useAfterChange();
   const [cornerId, setCornerId] = useState(props.evaluation.worstTotal.cornerId || props.evaluation.corners[0]?.cornerId);
   const [positionIndex, setPositionIndex] = useState(0);
   const targets = useMemo(() => knobTargets(design, positionIndex), [design, positionIndex]);
@@ -98,22 +99,17 @@ export function BudgetView(props: BudgetViewProps) {
 
   async function save(note: string): Promise<{ ok: boolean; message: string }> {
     if (!trial) return { ok: false, message: "Nothing changed: move a knob first." };
-    const res = await fetch(`/api/v1/options/${encodeURIComponent(optionId)}/revisions`, {
-      method: "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify({ baseRevision: props.revision, document: trial.document, partRefs: props.partRefs, note }),
-    });
-    const body = (await res.json().catch(() => ({}))) as { revision?: { revision: number }; error?: { message?: string } };
-    if (res.status === 201) {
-      router.refresh();
-      return { ok: true, message: `Saved as revision ${body.revision?.revision}. The page now shows it.` };
+    try {
+      const r = await fetchJson<{ revision: { revision: number } }>(`/api/v1/options/${encodeURIComponent(optionId)}/revisions`, {
+        method: "POST",
+        body: { baseRevision: props.revision, document: trial.document, partRefs: props.partRefs, note },
+      });
+      await afterChange();
+      return { ok: true, message: `Saved as revision ${r.revision.revision}. The page now shows it.` };
+    } catch (e) {
+      if (e instanceof ApiError && e.status === 409) return { ok: false, message: `${e.message} Reload the page to see the latest revision, then set your trial values again.` };
+      return { ok: false, message: e instanceof Error ? e.message : "The save failed." };
     }
-    if (res.status === 409)
-      return {
-        ok: false,
-        message: `${body.error?.message ?? "Someone saved a newer revision."} Reload the page to see the latest revision, then set your trial values again.`,
-      };
-    return { ok: false, message: body.error?.message ?? `The save failed (HTTP ${res.status}).` };
   }
 
   return (

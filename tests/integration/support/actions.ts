@@ -54,8 +54,9 @@ function stateOf(text: string): Record<string, unknown> | undefined {
 
 export async function callAction(client: Client, opts: { key: string; page: string; fields: Record<string, string> }): Promise<ActionReply> {
   const form = new FormData();
-  form.append("0", JSON.stringify([{ ok: true }, "$K1"]));
   for (const [k, v] of Object.entries(opts.fields)) form.append(`_1_${k}`, v);
+  // after the fields, as React writes it: the server reads the form's entries in order
+  form.append("0", JSON.stringify([{ ok: true }, "$K1"]));
   const r = await client.request("POST", opts.page, { formData: form, headers: { "next-action": actionId(opts.key), accept: "text/x-component" } });
   const redirect = r.headers.get("x-action-redirect") ?? (r.status >= 300 && r.status < 400 ? r.location : null);
   if (redirect) return { kind: "done", status: r.status, redirect };

@@ -1,7 +1,8 @@
 "use client";
 
 import { useRef, useState } from "react";
-import { useRouter } from "next/navigation";
+import { fetchJson } from "@/lib/api-client";
+import { useAfterChange } from "@/components/data/useAfterChange";
 import { Button, FormMessage } from "@/components/ui";
 
 export interface DatasheetPanelProps {
@@ -17,7 +18,7 @@ function size(bytes: number): string {
 
 /** Download, upload or replace the part's datasheet PDF (checked by content on the server). */
 export function DatasheetPanel({ partId, datasheet, canWrite, maxBytes }: DatasheetPanelProps) {
-  const router = useRouter();
+  const afterChange = useAfterChange();
   const input = useRef<HTMLInputElement>(null);
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
@@ -31,12 +32,12 @@ export function DatasheetPanel({ partId, datasheet, canWrite, maxBytes }: Datash
     try {
       const form = new FormData();
       form.append("file", file);
-      const res = await fetch(`/api/v1/parts/${partId}/datasheet`, { method: "POST", body: form });
-      const json = (await res.json().catch(() => ({}))) as { error?: { message: string } };
-      if (!res.ok) return setMessage({ tone: "error", text: json.error?.message ?? "The upload failed." });
+      await fetchJson(`/api/v1/parts/${partId}/datasheet`, { method: "POST", form });
       setMessage({ tone: "success", text: "Datasheet stored." });
       if (input.current) input.current.value = "";
-      router.refresh();
+      await afterChange();
+    } catch (e) {
+      setMessage({ tone: "error", text: e instanceof Error ? e.message : "The upload failed." });
     } finally {
       setBusy(false);
     }

@@ -4,16 +4,14 @@ import { useState } from "react";
 import Link from "next/link";
 import { Button, FormMessage, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
 import type { ImportPreview } from "@/services/parts/import";
+import { fetchJson } from "@/lib/api-client";
 
 type State =
   | { step: "choose" }
   | { step: "preview"; file: File; text: string; preview: ImportPreview }
   | { step: "done"; created: number; updated: number };
 
-async function post(url: string, text: string): Promise<{ ok: boolean; json: Record<string, unknown> }> {
-  const res = await fetch(url, { method: "POST", headers: { "content-type": "text/csv" }, body: text });
-  return { ok: res.ok, json: (await res.json().catch(() => ({}))) as Record<string, unknown> };
-}
+const post = <T,>(url: string, csv: string) => fetchJson<T>(url, { method: "POST", csv });
 
 /** Upload -> preview (every row checked, every problem listed) -> commit all rows or none. */
 export function ImportWizard({ maxBytes }: { maxBytes: number }) {
@@ -27,9 +25,9 @@ export function ImportWizard({ maxBytes }: { maxBytes: number }) {
     setBusy(true);
     try {
       const text = await file.text();
-      const r = await post("/api/v1/parts/import/preview", text);
-      if (!r.ok) return setError((r.json.error as { message?: string })?.message ?? "The file could not be read.");
-      setState({ step: "preview", file, text, preview: r.json as unknown as ImportPreview });
+      setState({ step: "preview", file, text, preview: await post<ImportPreview>("/api/v1/parts/import/preview", text) });
+    } catch (e) {
+      setError(e instanceof Error ? e.message : "The file could not be read.");
     } finally {
       setBusy(false);
     }
@@ -39,9 +37,10 @@ export function ImportWizard({ maxBytes }: { maxBytes: number }) {
     setBusy(true);
     setError(null);
     try {
-      const r = await post("/api/v1/parts/import/commit", text);
-      if (!r.ok) return setError((r.json.error as { message?: string })?.message ?? "Nothing was imported.");
-      setState({ step: "done", created: Number(r.json.created), updated: Number(r.json.updated) });
+      const r = await post<{ created: number; updated: number }>("/api/v1/parts/import/commit", text);
+      setState({ step: "done", created: r.created, updated: r.updated });
+    } catch (e) {
+      setError(e instanceof Error ? e.message : "Nothing was imported.");
     } finally {
       setBusy(false);
     }

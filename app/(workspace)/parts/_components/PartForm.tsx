@@ -1,10 +1,11 @@
 "use client";
 
 import { useState } from "react";
-import { useRouter } from "next/navigation";
 import { Button, FormMessage, Select, TextInput, Textarea } from "@/components/ui";
 import { PART_KINDS, PART_KIND_LABELS, type PartKind } from "@/lib/parts/kinds";
 import { partBodySchema } from "@/lib/parts/schema";
+import { ApiError, fetchJson, issuesByPath } from "@/lib/api-client";
+import { useAfterChange } from "@/components/data/useAfterChange";
 import { ParamFields } from "./ParamFields";
 import { QuantityField } from "./QuantityField";
 import { normaliseCost } from "./normalise";
@@ -25,17 +26,9 @@ export interface PartFormProps {
   initial: PartFormValues;
 }
 
-type Issue = { path: string; message: string };
-
-function issueMap(issues: Issue[]): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const i of issues) out[i.path || "form"] ??= i.message;
-  return out;
-}
-
 /** Create or edit a part; checked in the browser with the server's schema, then sent to /api/v1/parts. */
 export function PartForm({ partId, initial }: PartFormProps) {
-  const router = useRouter();
+  const afterChange = useAfterChange();
   const [v, setV] = useState<PartFormValues>(initial);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
@@ -57,28 +50,19 @@ export function PartForm({ partId, initial }: PartFormProps) {
     const body = { ...v, unitCost: v.unitCost || null };
     const local = partBodySchema.safeParse(body);
     if (!local.success) {
-      setErrors(issueMap(local.error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }))));
+      setErrors(issuesByPath(local.error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }))));
       setMessage({ tone: "error", text: "Check the highlighted fields." });
       return;
     }
     setBusy(true);
     try {
-      const res = await fetch(partId ? `/api/v1/parts/${partId}` : "/api/v1/parts", {
-        method: partId ? "PATCH" : "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify(body),
-      });
-      const json = (await res.json().catch(() => ({}))) as { part?: { id: string }; error?: { message: string; issues?: Issue[] } };
-      if (!res.ok || !json.part) {
-        setErrors(issueMap(json.error?.issues ?? []));
-        setMessage({ tone: "error", text: json.error?.message ?? "The part could not be saved." });
-        return;
-      }
+      const { part } = await fetchJson<{ part: { id: string } }>(partId ? `/api/v1/parts/${partId}` : "/api/v1/parts", { method: partId ? "PATCH" : "POST", body });
       setErrors({});
-      if (partId) {
-        setMessage({ tone: "success", text: "Saved." });
-        router.refresh();
-      } else router.push(`/parts/${json.part.id}`);
+      if (partId) setMessage({ tone: "success", text: "Saved." });
+      await afterChange(partId ? {} : { goTo: `/parts/${part.id}` });
+    } catch (e) {
+      setErrors(issuesByPath(e instanceof ApiError ? e.issues : []));
+      setMessage({ tone: "error", text: e instanceof Error ? e.message : "The part could not be saved." });
     } finally {
       setBusy(false);
     }

@@ -4,6 +4,8 @@ import Link from "next/link";
 import useSWR from "swr";
 import { Badge, Button, Table, TBody, Td, Th, THead, Tr, type SortDirection } from "@/components/ui";
 import { PART_KIND_LABELS } from "@/lib/parts/kinds";
+import { ApiError, fetchJson, getJson } from "@/lib/api-client";
+import { useAfterChange } from "@/components/data/useAfterChange";
 import type { PartPage } from "@/db/queries/parts";
 import { paramText, summaryOf } from "./summary";
 
@@ -17,14 +19,9 @@ export interface PartsTableProps {
   canWrite: boolean;
 }
 
-async function fetcher(url: string): Promise<PartPage> {
-  const res = await fetch(url, { headers: { accept: "application/json" } });
-  if (!res.ok) throw new Error(`parts list: ${res.status}`);
-  return res.json() as Promise<PartPage>;
-}
-
 export function PartsTable({ apiKey, initial, sortHrefs, sorted, param, canWrite }: PartsTableProps) {
-  const { data, mutate } = useSWR(apiKey, fetcher, { fallbackData: initial, revalidateOnMount: false });
+  const { data } = useSWR<PartPage>(apiKey, getJson, { fallbackData: initial, revalidateOnMount: false });
+  const afterChange = useAfterChange();
   const page = data ?? initial;
   const th = (key: string, label: string, numeric = false) => (
     <Th numeric={numeric} sortHref={sortHrefs[key]} sorted={sorted?.key === key ? sorted.dir : undefined}>
@@ -33,8 +30,12 @@ export function PartsTable({ apiKey, initial, sortHrefs, sorted, param, canWrite
   );
   async function remove(id: string, mpn: string) {
     if (!window.confirm(`Delete ${mpn} from the library?`)) return;
-    const res = await fetch(`/api/v1/parts/${id}`, { method: "DELETE" });
-    if (res.ok || res.status === 404) await mutate();
+    try {
+      await fetchJson(`/api/v1/parts/${id}`, { method: "DELETE" });
+    } catch (e) {
+      if (!(e instanceof ApiError && e.status === 404)) return; // gone already is as good as deleted
+    }
+    await afterChange({ revalidate: [apiKey], page: false });
   }
   return (
     <Table caption={`Parts (${page.total})`}>

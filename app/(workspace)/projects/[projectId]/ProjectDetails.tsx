@@ -1,7 +1,6 @@
 "use client";
 
 import { useRef, useState } from "react";
-import { useRouter } from "next/navigation";
 import useSWR from "swr";
 import { Button, FormMessage, Panel } from "@/components/ui";
 import { formatQuantity } from "@/models/units";
@@ -10,6 +9,7 @@ import { projectInputSchema, STATUS_LABELS, TOPOLOGY_LABELS } from "@/lib/projec
 import { ProjectFields, projectFormObject } from "../_components/ProjectFields";
 import { projectFormText } from "../_components/projectText";
 import { ApiError, fetchJson, getJson, issuesByPath } from "@/lib/api-client";
+import { useAfterChange } from "@/components/data/useAfterChange";
 
 type ProjectResponse = { project: ProjectRecord };
 
@@ -26,7 +26,7 @@ export function ProjectDetails({ project: initial, canEdit }: { project: Project
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const formRef = useRef<HTMLFormElement>(null);
-  const router = useRouter();
+  const afterChange = useAfterChange();
 
   async function save(event: React.FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -46,7 +46,7 @@ export function ProjectDetails({ project: initial, canEdit }: { project: Project
         revalidate: false,
       });
       setMessage({ tone: "success", text: "Project saved." });
-      router.refresh();
+      await afterChange();
     } catch (e) {
       setEditing(true);
       if (e instanceof ApiError) setErrors(issuesByPath(e.issues));

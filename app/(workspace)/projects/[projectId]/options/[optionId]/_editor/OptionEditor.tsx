@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useMemo, useState } from "react";
-import { useSWRConfig } from "swr";
+import { useAfterChange } from "@/components/data/useAfterChange";
 import { Button, Panel } from "@/components/ui";
 import type { OptionRecord } from "@/db/queries/options";
 import { getAt } from "@/lib/docPaths";
@@ -30,7 +30,7 @@ export function OptionEditor({ option, projectName, initial, revisions, canWrite
   const ed = useOptionEditor({ optionId: option.id, initial });
   const [selected, setSelected] = useState("positions.0.drive");
   const [view, setView] = useState<"diagram" | "json">("diagram");
-  const { mutate } = useSWRConfig();
+  const afterChange = useAfterChange();
   const readOnly = !canWrite;
 
   const api = useMemo<EditorApi>(
@@ -48,7 +48,7 @@ export function OptionEditor({ option, projectName, initial, revisions, canWrite
   async function save(note: string) {
     const rev = await ed.save(note);
     // refreshed after a refusal too: a conflict means the history has grown
-    void Promise.all([mutate(revisionsKey(option.id)), mutate(`/api/v1/options/${option.id}`)]);
+    void afterChange({ revalidate: [revisionsKey(option.id), `/api/v1/options/${option.id}`], page: false });
     return rev;
   }
 

@@ -1,12 +1,12 @@
 "use client";
 
 import { useState } from "react";
-import { useRouter } from "next/navigation";
 import useSWR from "swr";
 import { Badge, Button, LinkButton, PageHeader, TextInput } from "@/components/ui";
 import type { OptionRecord } from "@/db/queries/options";
 import { optionPatchSchema } from "@/lib/options/schema";
 import { fetchJson, getJson } from "@/lib/api-client";
+import { useAfterChange } from "@/components/data/useAfterChange";
 
 type OptionResponse = { option: OptionRecord };
 
@@ -18,7 +18,7 @@ export function OptionHeader({ option: initial, projectName, canWrite, dirty }: 
   const [renaming, setRenaming] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const [duplicating, setDuplicating] = useState(false);
-  const router = useRouter();
+  const afterChange = useAfterChange();
 
   async function rename(name: string) {
     const parsed = optionPatchSchema.safeParse({ name });
@@ -42,7 +42,7 @@ export function OptionHeader({ option: initial, projectName, canWrite, dirty }: 
     setDuplicating(true);
     try {
       const r = await fetchJson<OptionResponse>(`/api/v1/options/${option.id}/duplicate`, { method: "POST", body: {} });
-      router.push(`/projects/${option.projectId}/options/${r.option.id}`);
+      await afterChange({ goTo: `/projects/${option.projectId}/options/${r.option.id}` });
     } catch (e) {
       setError(`Not duplicated: ${(e as Error).message}`);
       setDuplicating(false);

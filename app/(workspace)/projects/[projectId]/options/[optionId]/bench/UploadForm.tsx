@@ -1,12 +1,12 @@
 "use client";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button, FormMessage, Select } from "@/components/ui";
-import type { ApiIssue } from "@/lib/api-client";
+import { ApiError, fetchJson, type ApiIssue } from "@/lib/api-client";
+import { useAfterChange } from "@/components/data/useAfterChange";
 
 /** Posts the CSV as multipart to the bench route; row-level refusals are listed as sent back. */
 export function UploadForm({ optionId, revisions }: { optionId: string; revisions: number[] }) {
-  const router = useRouter();
+  const afterChange = useAfterChange();
   const [busy, setBusy] = useState(false);
   const [message, setMessage] = useState<{ tone: "success" | "error"; text: string; issues: ApiIssue[] } | null>(null);
 
@@ -15,13 +15,11 @@ export function UploadForm({ optionId, revisions }: { optionId: string; revision
     setBusy(true);
     setMessage(null);
     try {
-      const res = await fetch(`/api/v1/options/${optionId}/bench`, { method: "POST", body: new FormData(e.currentTarget), credentials: "same-origin" });
-      const data = await res.json().catch(() => ({}));
-      if (!res.ok) setMessage({ tone: "error", text: data?.error?.message ?? `The server answered ${res.status}.`, issues: data?.error?.issues ?? [] });
-      else {
-        setMessage({ tone: "success", text: `Stored ${data.run.rowCount} readings.`, issues: [] });
-        router.push(`${window.location.pathname}/${data.run.id}`);
-      }
+      const { run } = await fetchJson<{ run: { id: string; rowCount: number } }>(`/api/v1/options/${optionId}/bench`, { method: "POST", form: new FormData(e.currentTarget) });
+      setMessage({ tone: "success", text: `Stored ${run.rowCount} readings.`, issues: [] });
+      await afterChange({ goTo: `${window.location.pathname}/${run.id}` });
+    } catch (err) {
+      setMessage({ tone: "error", text: err instanceof Error ? err.message : "The upload failed.", issues: err instanceof ApiError ? err.issues : [] });
     } finally {
       setBusy(false);
     }

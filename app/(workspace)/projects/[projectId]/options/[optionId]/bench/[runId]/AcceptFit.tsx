@@ -1,8 +1,8 @@
 "use client";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button, FormMessage, Panel } from "@/components/ui";
 import { ApiError, fetchJson } from "@/lib/api-client";
+import { useAfterChange } from "@/components/data/useAfterChange";
 
 interface Fittable {
   id: string;
@@ -17,7 +17,7 @@ const kw = (v: number) => `${Number(v.toPrecision(4))} K/W`;
 
 /** Reviewer only: write the chosen fitted resistances into a new revision of the option. */
 export function AcceptFit({ optionId, runId, revision, latestRevision, parts }: { optionId: string; runId: string; revision: number; latestRevision: number; parts: Fittable[] }) {
-  const router = useRouter();
+  const afterChange = useAfterChange();
   const [chosen, setChosen] = useState<Set<string>>(() => new Set(parts.filter((p) => p.outsideBand).map((p) => p.id)));
   const [msg, setMsg] = useState<{ tone: "success" | "error"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
@@ -28,7 +28,7 @@ export function AcceptFit({ optionId, runId, revision, latestRevision, parts }: 
     try {
       const r = await fetchJson<{ revision: { revision: number } }>(`/api/v1/options/${optionId}/bench/${runId}/accept`, { method: "POST", body: { parts: [...chosen] } });
       setMsg({ tone: "success", text: `Saved as revision ${r.revision.revision}.` });
-      router.refresh();
+      await afterChange();
     } catch (e) {
       setMsg({ tone: "error", text: e instanceof ApiError ? [e.message, ...e.issues.map((i) => i.message)].join(" ") : "Could not save." });
     } finally {
