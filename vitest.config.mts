@@ -17,7 +17,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: "unit",
-          include: ["models/**/*.test.ts", "tests/unit/**/*.test.ts", "components/**/*.test.ts"],
+          include: ["tests/unit/**/*.test.ts"],
           environment: "node",
         },
       },

@@ -19,19 +19,23 @@ const P = path.posix;
 
 /** Folder -> the folders its files may import (their own included). */
 export const MAY_IMPORT = {
-  app: ["app", "components", "services", "db", "lib", "models"],
+  app: ["app", "components", "services", "db", "lib", "models", "models/input"],
   components: ["components", "lib", "models"],
-  services: ["services", "db", "lib", "models"],
-  db: ["db", "lib", "models"],
-  lib: ["lib", "models"],
+  services: ["services", "db", "lib", "models", "models/input"],
+  db: ["db", "lib", "models", "models/input"],
+  lib: ["lib", "models", "models/input"],
   "models/input": ["models/input", "models"],
   models: ["models"],
   simulation: ["simulation"],
 };
 
-/** Type-only imports that may point one step further (the browser never loads them). */
+/**
+ * Type-only imports that may point further (erased when compiled, so the
+ * browser never loads them): reusable UI reads record and design types, the
+ * model's core reads the document types its input layer defines.
+ */
 export const MAY_IMPORT_TYPES = {
-  components: ["db", "services"],
+  components: ["db", "services", "models/input"],
   models: ["models/input"],
 };
 

@@ -1,45 +1,9 @@
 /**
- * Reading and writing a design document by dotted path ("positions.0.gate.rTurnOn"),
- * immutably, and the three-way re-apply the editor offers after a save
- * conflict: the user's changes (base -> mine) laid onto the latest revision.
+ * The three-way re-apply the editor offers after a save conflict: the
+ * user's changes (base -> mine) laid onto the latest revision. Paths are
+ * read and written by models/documentPath.ts.
  */
-export type Json = unknown;
-
-export function splitPath(path: string): string[] {
-  return path === "" ? [] : path.split(".");
-}
-
-export function getAt(doc: Json, path: string): Json {
-  let cur: Json = doc;
-  for (const key of splitPath(path)) {
-    if (cur === null || typeof cur !== "object") return undefined;
-    cur = (cur as Record<string, Json>)[key];
-  }
-  return cur;
-}
-
-function cloneShallow(node: Json, nextKey: string): Record<string, Json> | Json[] {
-  if (Array.isArray(node)) return [...node];
-  if (node !== null && typeof node === "object") return { ...(node as Record<string, Json>) };
-  return /^\d+$/.test(nextKey) ? [] : {};
-}
-
-/** A copy of `doc` with `value` at `path`; `undefined` removes the key (or array element). */
-export function setAt(doc: Json, path: string, value: Json): Json {
-  const keys = splitPath(path);
-  if (keys.length === 0) return value;
-  const [head, ...rest] = keys;
-  const node = cloneShallow(doc, head);
-  const child = setAt((node as Record<string, Json>)[head], rest.join("."), value);
-  if (Array.isArray(node)) {
-    const i = Number(head);
-    if (child === undefined && rest.length === 0) node.splice(i, 1);
-    else node[i] = child;
-  } else if (child === undefined && rest.length === 0) delete (node as Record<string, Json>)[head];
-  else (node as Record<string, Json>)[head] = child;
-  return node;
-}
-
+import { getAt, setAt, type Json } from "../models/documentPath";
 function isPlainObject(v: Json): v is Record<string, Json> {
   return v !== null && typeof v === "object" && !Array.isArray(v);
 }

@@ -5,7 +5,7 @@
  * bias resistor. Parts without a cost count as parts at 0 USD and are listed
  * in `unpriced`.
  */
-import type { Design } from "./schema";
+import type { Design } from "./input/schema";
 
 export interface BomLine {
   ref: string;

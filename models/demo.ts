@@ -9,7 +9,7 @@
  * secondary driver ICs); option 5 keeps option 3's primary and drives the
  * SRs from windings. Every part and number is invented (see demoParts.ts).
  */
-import type { DesignInput } from "./schema";
+import type { DesignInput } from "./input/schema";
 import {
   clampQZ12, controllerHRGPC72, driverHRGLS9T, driverHRGSR5K, mosfetQN080S3, mosfetQN150F12,
   npnQTN3HC, npnQTN6SL, pnpQTP3HC, pnpQTP6SL, transformerGRWT16,

@@ -22,7 +22,7 @@
  * hFE is taken at the edge's peak current, the lowest gain of the edge,
  * which is conservative for the controller.
  */
-import type { Design } from "./schema";
+import type { Design } from "./input/schema";
 import { NO_LIMIT, type EdgePath, type PathElement, type StageContext, type StageResult, gateElements } from "./driveCommon";
 import { STARVATION_FRACTION } from "./policy";
 

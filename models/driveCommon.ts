@@ -4,7 +4,7 @@
  * sweep over those can reuse it) and the series-path arithmetic.
  */
 import type { LossMechanism } from "./losses";
-import type { Design, Position } from "./schema";
+import type { Design, Position } from "./input/schema";
 
 /** Fraction of one edge's ½·ΔQ·ΔV energy burnt in a part. */
 export interface Share {

@@ -25,7 +25,7 @@
  * split (gatePower.ts rule) → switching edges (switching.ts) → conduction
  * (conduction.ts) → electro-thermal network (thermal.ts).
  */
-import type { Design } from "./schema";
+import type { Design } from "./input/schema";
 import { computeCorner, prepare, type Prepared } from "./evaluateCore";
 import { buildCornerResult, type CornerResult, type JunctionState } from "./evaluateReport";
 import { cornerWarnings, type Warning } from "./warnings";

@@ -5,7 +5,7 @@
  * evaluateReport.ts. Position losses: evaluatePosition.ts; thermal groups:
  * evaluateThermal.ts; shared shapes: evaluateTypes.ts.
  */
-import type { Design, Position } from "./schema";
+import type { Design, Position } from "./input/schema";
 import { qgs2, type GateChargeCurve } from "./gateCharge";
 import { cornerWaveform } from "./waveform";
 import { buildParts, buildThermalGroups } from "./registry";

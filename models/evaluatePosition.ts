@@ -4,7 +4,7 @@
  * resistors stay put), gate energy split, buffer/clamp drops, switching
  * edges, Eoss, reverse recovery and diode conduction.
  */
-import type { Corner } from "./schema";
+import type { Corner } from "./input/schema";
 import { swingCharge } from "./gateCharge";
 import { driveStage } from "./driveStage";
 import { hardEdge, eossAt, type HardEdge } from "./switching";

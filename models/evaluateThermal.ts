@@ -3,7 +3,7 @@
  * constant losses plus I²·Rds(T) for MOSFET nodes, through thermal.ts.
  * Solvers and their scratch arrays are built once per design.
  */
-import type { Position } from "./schema";
+import type { Position } from "./input/schema";
 import { rdsAt, rdsSlope } from "./conduction";
 import { networkScratch, solveNetwork, type NetworkProblem } from "./thermal";
 import type { ThermalGroup } from "./registry";

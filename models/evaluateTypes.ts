@@ -2,7 +2,7 @@
  * Shapes shared by the fast evaluation path (evaluateCore.ts and its
  * helpers, and the sweep / spread helpers that reuse a Prepared design).
  */
-import type { Design, Position } from "./schema";
+import type { Design, Position } from "./input/schema";
 import { LOSS_MECHANISMS, MECH_INDEX } from "./losses";
 import type { GateChargeCurve } from "./gateCharge";
 import type { StageResult } from "./driveStage";

@@ -5,8 +5,9 @@
  * written back as the document value it corresponds to. Pure: the caller
  * loads the design and the readings.
  */
-import type { Design } from "./schema";
+import type { Design } from "./input/schema";
 import type { PartKind } from "./partIds";
+import { getAt, setAt, splitPath } from "./documentPath";
 import { buildCornerResult, computeCorner, prepare, type Prepared } from "./evaluate";
 import { CORRELATION_BAND_K, fitThermalResistance, surfaceTemperature, type FitPoint, type Surface, type ThermalFit } from "./fit";
 
@@ -110,7 +111,7 @@ export function correlateBench(design: Design, readings: BenchReadingInput[], ba
 /** The document value that gives the network the fitted resistance. */
 export function proposalFor(design: Design, part: BenchPart, rthFit: number): PartCorrelation["proposal"] {
   const segs = part.element.split(".");
-  const previous = readPath(design, segs);
+  const previous = getAt(design, part.element);
   let value = rthFit;
   if (part.kind === "mosfet" && segs[segs.length - 1] === "rthSA") {
     const m = design.positions[Number(segs[1])].mosfet;
@@ -121,22 +122,9 @@ export function proposalFor(design: Design, part: BenchPart, rthFit: number): Pa
   return { path: part.element, value, previous: typeof previous === "number" ? previous : Number.NaN };
 }
 
-function readPath(obj: unknown, segs: string[]): unknown {
-  let cur: unknown = obj;
-  for (const s of segs) cur = cur && typeof cur === "object" ? (cur as Record<string, unknown>)[s] : undefined;
-  return cur;
-}
-
 /** A copy of a raw document (unit strings kept) with one value set, written in K/W. */
 export function withDocumentValue(document: unknown, path: string, value: number): unknown {
-  const copy = structuredClone(document) as Record<string, unknown>;
-  const segs = path.split(".");
-  let cur: Record<string, unknown> = copy;
-  for (const s of segs.slice(0, -1)) {
-    const next = cur[s];
-    if (!next || typeof next !== "object") throw new Error(`no element at ${path}`);
-    cur = next as Record<string, unknown>;
-  }
-  cur[segs[segs.length - 1]] = `${Number(value.toPrecision(4))} K/W`;
-  return copy;
+  const parent = getAt(document, splitPath(path).slice(0, -1).join("."));
+  if (!parent || typeof parent !== "object") throw new Error(`no element at ${path}`);
+  return setAt(document, path, `${Number(value.toPrecision(4))} K/W`);
 }

@@ -1,6 +1,8 @@
-/** Public API of the Heatsplit model (pure TypeScript, browser and server). */
-export * from "./units";
-export * from "./schema";
+/**
+ * Public API of the Heatsplit model's core: pure TypeScript, browser-safe
+ * (no parser). The input layer (unit strings, the zod schema, the design
+ * document's JSON Schema) is models/input/ and has its own barrel.
+ */
 export * from "./losses";
 export * from "./policy";
 export * from "./gateCharge";

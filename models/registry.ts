@@ -2,7 +2,7 @@
  * The parts a design produces (naming in partIds.ts), their thermal nodes,
  * the coupling matrix and its connected groups. Built once per design.
  */
-import type { Design, Position } from "./schema";
+import type { Design, Position } from "./input/schema";
 import type { PartKind } from "./partIds";
 import type { PartType } from "./policy";
 

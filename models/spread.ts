@@ -17,7 +17,7 @@
  * each part keeps its hottest corner (runaway at any corner = runaway).
  * Same seed, same design, same options -> identical numbers (models/rng.ts).
  */
-import type { Design } from "./schema";
+import type { Design } from "./input/schema";
 import { computeCorner, prepare, type Prepared } from "./evaluateCore";
 import { evaluateDesign } from "./evaluate";
 import { qgs2 } from "./gateCharge";

@@ -15,7 +15,7 @@
  * The plan mirrors computePosition term by term; tests/unit/sweep.test.ts
  * checks sampled cells against a full evaluateDesign of the modified design.
  */
-import type { Design } from "./schema";
+import type { Design } from "./input/schema";
 import { LOSS_MECHANISMS, MECH_INDEX as M } from "./losses";
 import { prepare, NM } from "./evaluateCore";
 import { evaluateDesign } from "./evaluate";

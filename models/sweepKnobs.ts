@@ -3,7 +3,7 @@
  * against the design, its value at the design point, and the knobs
  * (fsw, gate-charge scale, ambient, Vin, gate resistance) it turns.
  */
-import type { Design } from "./schema";
+import type { Design } from "./input/schema";
 import type { Prepared } from "./evaluateCore";
 import type { StageKnobs } from "./sweepPlan";
 import { SweepSpecError, type SweepAxis } from "./sweepTypes";

@@ -6,7 +6,7 @@
  * turnOnId, turnOffVds, turnOffId; the evaluation keeps its short names
  * (vdsOn, idOn, vdsOff, idOff) in `Waveform`, which the result reports.
  */
-import type { Corner, Position } from "./schema";
+import type { Corner, Position } from "./input/schema";
 
 export interface Waveform {
   vdsOn: number;

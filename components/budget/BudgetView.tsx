@@ -5,7 +5,7 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import { ApiError, fetchJson } from "@/lib/api-client";
 import { useAfterChange } from "@/components/data/useAfterChange";
 import type { Evaluation } from "@/models/evaluate";
-import type { Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import { Badge, Caution, Panel, Quantity } from "@/components/ui";
 import { MechanismLegend } from "@/components/charts/MechanismLegend";
 import { CornerStrip } from "./CornerStrip";
@@ -16,7 +16,7 @@ import { ControllerView, type OptionControllerSummary } from "./ControllerView";
 import { WhatIf } from "./WhatIf";
 import { ThermalMap } from "./ThermalMap";
 import { lossBarData, warningsFor } from "./shape";
-import { applyKnobs, applyKnobsToDesign, knobTargets, knobsChanged, readKnobs, trialIssues, type Knobs } from "./whatif";
+import { knobEdits, knobTargets, knobsChanged, readKnobs, trialIssues, withEdits, type Knobs } from "./trialEdits";
 
 const loadLossChart = () => import("@/components/charts/LossStackChart");
 // Fetch the chart's chunk while the page hydrates instead of after.
@@ -74,15 +74,16 @@ export function BudgetView(props: BudgetViewProps) {
       setIssues([]);
       return;
     }
-    const problems = trialIssues(design, targets, knobs);
+    const edits = knobEdits(design, targets, knobs);
+    const problems = trialIssues(edits);
     setIssues(problems);
     if (problems.length) return;
     let live = true;
     (evaluator.current ??= loadEvaluator()).then((evaluateDesign) => {
       if (!live) return;
       // `design` carries the workspace derating policy the server applied; the trial keeps it.
-      const trialDesign = applyKnobsToDesign(design, targets, knobs);
-      setTrial({ document: applyKnobs(props.document, design, targets, knobs), design: trialDesign, evaluation: evaluateDesign(trialDesign) });
+      const trialDesign = withEdits(design, edits);
+      setTrial({ document: withEdits(props.document, edits), design: trialDesign, evaluation: evaluateDesign(trialDesign) });
     });
     return () => {
       live = false;

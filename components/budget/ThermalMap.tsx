@@ -2,7 +2,7 @@
 
 import dynamic from "next/dynamic";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import type { Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import { Button } from "@/components/ui";
 import type { Point } from "@/components/charts/geometry";
 import { createSweepWorker } from "@/components/charts/sweepWorker";

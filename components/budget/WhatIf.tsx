@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { Button, FormMessage, cx, formatSi } from "@/components/ui";
-import { knobRanges, type KnobTargets, type Knobs } from "./whatif";
+import { knobRanges, type KnobTargets, type Knobs } from "./trialEdits";
 
 type KnobKey = keyof Knobs;
 

@@ -7,7 +7,7 @@
  * without a cost are counted and named in `missingCost`, so a total that
  * leaves something out says so. Pure.
  */
-import type { Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 
 export interface DriveChainBill {
   partCount: number;

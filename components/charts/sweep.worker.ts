@@ -9,7 +9,7 @@
  * Between chunks the worker yields to its event loop, so a cancel message is
  * seen within one chunk; shouldStop also ends a chunk early.
  */
-import type { Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import { mergeSweepChunks, sweepGrid, type SweepResult } from "@/models/sweep";
 import { toModelSpec, type SweepSpec } from "./sweepAxes";
 

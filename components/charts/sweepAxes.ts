@@ -3,7 +3,7 @@
  * and small helpers only, so the dashboard can import them without pulling
  * the model (and its unit parser) into the page's first bundle.
  */
-import type { Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import type { SweepSpec as ModelSweepSpec } from "@/models/sweep";
 
 export const SWEEP_AXES = ["fsw", "qgScale", "vin", "ambient", "rGate"] as const;

@@ -10,7 +10,8 @@
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { demoParts, type DemoPart } from "../../models/demoParts";
-import { flattenParams, validatePartDraft, type PartDraft, type PartValues } from "../../lib/parts/values";
+import { validatePartDraft, type PartDraft, type PartValues } from "../../lib/parts/values";
+import { flattenPaths } from "../../models/documentPath";
 import type { PartKind } from "../../lib/parts/kinds";
 
 const MAKER_BY_PREFIX: [RegExp, string][] = [
@@ -27,7 +28,7 @@ function makerOf(mpn: string): string {
 function draftOf(p: DemoPart): PartDraft | null {
   const { partNumber: _pn, cost: _cost, tolerance, count: _count, ...block } = p.data as Record<string, unknown>;
   let kind: PartKind;
-  let params: Record<string, unknown> = flattenParams(block);
+  let params: Record<string, unknown> = flattenPaths(block);
   switch (p.kind) {
     case "passive":
       return null; // gate resistors are part of a design's gate network, not library parts

@@ -9,7 +9,7 @@
 // alone, so a second run adds nothing and never overwrites user edits.
 import type { Knex } from "knex";
 import { demoOptions } from "../../models/demo";
-import { getAt } from "../../lib/docPaths";
+import { getAt } from "../../models/documentPath";
 import { partSlots } from "../../lib/parts/slots";
 
 export const DEMO_PROJECT_ID = "prj_demo_hx240";

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { qty } from "@/models/units";
+import { qty } from "@/models/input/units";
 import { PART_TYPES, type PartType } from "@/models/policy";
 
 // The workspace derating policy as the settings form and PUT /api/v1/derating

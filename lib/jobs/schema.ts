@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { sweepSpecSchema } from "@/models/sweepSchema";
+import { sweepSpecSchema } from "@/models/input/sweepSchema";
 
 // Background jobs: what POST /api/v1/jobs accepts. Each job names an option
 // revision of the caller's workspace; the worker loads it from there. The

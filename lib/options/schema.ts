@@ -8,7 +8,7 @@
  * product only ever writes the current version.
  */
 import { z } from "zod";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 import { upgradeDesignDocument } from "@/models/schemaUpgrade";
 import { isTemplateKey } from "./templates";
 import { recordIdSchema } from "../projects/schema";

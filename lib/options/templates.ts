@@ -4,7 +4,7 @@
  * form lists them, the server copies the chosen document.
  */
 import { demoOptions } from "@/models/demo";
-import type { DesignInput } from "@/models/schema";
+import type { DesignInput } from "@/models/input/schema";
 
 export interface OptionTemplate {
   key: string;

@@ -13,7 +13,8 @@
 import Papa from "papaparse";
 import { PART_KIND_DEFS, allParamAliases, allParamKeys, allToleranceKeys, type ParamField } from "./kinds";
 import { formatExact, formatHfeCurve, formatVoltSecond, type HfePoint } from "./paramText";
-import { getPath, validatePartDraft, type PartValues } from "./values";
+import { validatePartDraft, type PartValues } from "./values";
+import { getAt } from "../../models/documentPath";
 import { writeCsv } from "../csv";
 
 export const MAX_IMPORT_ROWS = 5000;
@@ -123,7 +124,7 @@ type ExportPart = Pick<PartValues, "kind" | "manufacturer" | "mpn" | "descriptio
 
 /** The export: only columns some part uses, in a fixed order; reads back through parsePartsCsv unchanged. */
 export function serializePartsCsv(parts: readonly ExportPart[]): string {
-  const paramCols = allParamKeys().filter((k) => parts.some((p) => getPath(p.params, k) !== undefined));
+  const paramCols = allParamKeys().filter((k) => parts.some((p) => getAt(p.params, k) !== undefined));
   const tolCols = allToleranceKeys().filter((k) => parts.some((p) => p.tolerance[k] !== undefined));
   const fields = [...BASE_COLUMNS, ...paramCols.map((k) => PARAM_PREFIX + k), ...tolCols.map((k) => TOL_PREFIX + k)];
   const data = parts.map((p) => {
@@ -131,7 +132,7 @@ export function serializePartsCsv(parts: readonly ExportPart[]): string {
     const row: string[] = [p.kind, p.manufacturer, p.mpn, p.description, p.unitCost === null ? "" : String(p.unitCost)];
     for (const k of paramCols) {
       const f = defs.find((d) => d.key === k);
-      row.push(f ? cellOf(f, getPath(p.params, k)) : "");
+      row.push(f ? cellOf(f, getAt(p.params, k)) : "");
     }
     for (const k of tolCols) row.push(p.tolerance[k] === undefined ? "" : String(p.tolerance[k]));
     return row;

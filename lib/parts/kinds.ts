@@ -8,7 +8,7 @@
  * can copy it. `model: false` marks library-only figures the model does not
  * read (polarity, ratings); partToModelBlock() leaves them out.
  */
-import type { Dimension, QtyOptions } from "@/models/units";
+import type { Dimension, QtyOptions } from "@/models/input/units";
 
 export const PART_KINDS = ["controller", "mosfet", "bjt", "driver-ic", "diode", "zener", "gate-transformer"] as const;
 export type PartKind = (typeof PART_KINDS)[number];

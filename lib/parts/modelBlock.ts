@@ -7,16 +7,17 @@
  * own defaults.
  */
 import { PART_KIND_DEFS, type PartKind } from "./kinds";
-import { getPath, setPath, type PartParams, type PartValues } from "./values";
+import { type PartParams, type PartValues } from "./values";
+import { getAt, setAt } from "../../models/documentPath";
 
 type LibraryPart = Pick<PartValues, "kind" | "mpn" | "unitCost" | "params" | "tolerance">;
 
 function modelParams(kind: PartKind, params: PartParams): Record<string, unknown> {
-  const out: Record<string, unknown> = {};
+  let out: Record<string, unknown> = {};
   for (const f of PART_KIND_DEFS[kind].fields) {
     if (f.model === false) continue;
-    const v = getPath(params, f.key);
-    if (v !== undefined) setPath(out, f.key, v);
+    const v = getAt(params, f.key);
+    if (v !== undefined) out = setAt(out, f.key, v) as Record<string, unknown>;
   }
   return out;
 }

@@ -5,7 +5,7 @@
  * an export must read back to the same number).
  */
 import { create, unitDependencies } from "mathjs";
-import { formatQuantity, parseQuantity, QuantityError, type Dimension } from "@/models/units";
+import { formatQuantity, parseQuantity, QuantityError, type Dimension } from "@/models/input/units";
 
 const { unit } = create({ unitDependencies });
 

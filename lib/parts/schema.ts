@@ -4,9 +4,10 @@
  * every schema, so the browser shows the field errors the server would return.
  */
 import { z } from "zod";
-import { parseQuantity, type Dimension } from "@/models/units";
+import { parseQuantity, type Dimension } from "@/models/input/units";
 import { PART_KINDS, PART_KIND_DEFS, type PartKind } from "@/lib/parts/kinds";
-import { flattenParams, validatePartDraft, type PartDraft, type PartValues } from "@/lib/parts/values";
+import { validatePartDraft, type PartDraft, type PartValues } from "@/lib/parts/values";
+import { flattenPaths } from "../../models/documentPath";
 import { snap } from "@/lib/parts/paramText";
 
 const raw = z.union([z.string(), z.number(), z.null()]).optional();
@@ -24,7 +25,7 @@ export const partDraftSchema = z.object({
 export type PartDraftInput = z.input<typeof partDraftSchema>;
 
 function toValues(d: z.output<typeof partDraftSchema>, ctx: z.RefinementCtx): PartValues {
-  const r = validatePartDraft({ ...d, params: flattenParams(d.params) } satisfies PartDraft);
+  const r = validatePartDraft({ ...d, params: flattenPaths(d.params) } satisfies PartDraft);
   if (r.ok) return r.value;
   // keep "params.pin.sinkResistance" one path segment per dot, as zod reports nested paths
   for (const i of r.issues) ctx.addIssue({ code: "custom", path: i.path.split("."), message: i.message });

@@ -7,7 +7,7 @@
  */
 // relative import: the demo seed loads this file under tsx, outside Next's aliases
 import { PART_KIND_DEFS, type PartKind } from "./kinds";
-import { getAt } from "../docPaths";
+import { getAt } from "../../models/documentPath";
 
 export interface PartSlot {
   /** part_refs key, e.g. "positions.0.drive.npn" or "positions.1.drive.clamp.zener". */

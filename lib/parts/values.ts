@@ -8,13 +8,12 @@
  * the model's to fill in, never shown as if read from a datasheet.
  */
 import { z } from "zod";
-import { qty } from "@/models/units";
-import { bjtSchema, controllerSchema, driverIcSchema, mosfetSchema } from "@/models/schemaParts";
+import { qty } from "@/models/input/units";
+import { bjtSchema, controllerSchema, driverIcSchema, mosfetSchema } from "@/models/input/schemaParts";
 import { PARAM_KEY_ALIASES, PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, isPartKind, type ParamField, type PartKind, type ToleranceKey } from "./kinds";
 import { parseHfeCurve, parseVoltSecond, snap } from "./paramText";
-import { getPath, setPath } from "./paramPaths";
+import { flattenPaths, getAt, setAt } from "../../models/documentPath";
 
-export { flattenParams, getPath, setPath } from "./paramPaths";
 
 export const MPN_MAX = 80;
 export const MANUFACTURER_MAX = 120;
@@ -121,8 +120,8 @@ function withAliasesResolved(kind: PartKind, raw: Record<string, unknown>, issue
 function validateParams(kind: PartKind, rawGiven: Record<string, unknown>, issues: PartIssue[]): PartParams {
   const def = PART_KIND_DEFS[kind];
   const given = withAliasesResolved(kind, rawGiven, issues);
-  const params: PartParams = {};
-  const modelInput: Record<string, unknown> = {};
+  let params: PartParams = {};
+  let modelInput: Record<string, unknown> = {};
   const modelKeys: ParamField[] = [];
   const issue = (key: string, message: string) => issues.push({ path: `params.${key}`, message });
   for (const key of Object.keys(given)) {
@@ -137,9 +136,9 @@ function validateParams(kind: PartKind, rawGiven: Record<string, unknown>, issue
     }
     try {
       if (modelSchema && field.model !== false) {
-        setPath(modelInput, field.key, rawForModel(field, raw));
+        modelInput = setAt(modelInput, field.key, rawForModel(field, raw)) as Record<string, unknown>;
         modelKeys.push(field);
-      } else setPath(params, field.key, parseOwnField(field, raw));
+      } else params = setAt(params, field.key, parseOwnField(field, raw)) as PartParams;
     } catch (e) {
       issue(field.key, messageOf(e));
     }
@@ -160,7 +159,7 @@ function validateParams(kind: PartKind, rawGiven: Record<string, unknown>, issue
       }
     } else {
       const out = r.data as Record<string, unknown>;
-      for (const f of modelKeys) setPath(params, f.key, getPath(out, f.key));
+      for (const f of modelKeys) params = setAt(params, f.key, getAt(out, f.key)) as PartParams;
     }
   }
   return snapDeep(params) as PartParams;

@@ -5,7 +5,7 @@
  * unit (V, A, Hz, °C) or a string with a unit ("250 kHz", "92 %").
  */
 import { z } from "zod";
-import { parseQuantity, type Dimension } from "@/models/units";
+import { parseQuantity, type Dimension } from "@/models/input/units";
 
 export const TOPOLOGIES = ["flyback", "forward", "active-clamp-forward", "half-bridge", "full-bridge", "buck", "boost", "llc", "other"] as const;
 export type Topology = (typeof TOPOLOGIES)[number];

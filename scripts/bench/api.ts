@@ -12,7 +12,7 @@
 import autocannon from "autocannon";
 import { demoOptions } from "../../models/demo";
 import { signUp } from "../load/common";
-import { parseDesign } from "../../models/schema";
+import { parseDesign } from "../../models/input/schema";
 import { evaluateDesign } from "../../models/evaluate";
 import { assertFinite } from "../../lib/finite";
 

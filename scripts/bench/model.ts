@@ -8,7 +8,7 @@
 // threaded), which other load on the machine inflates far less than wall time;
 // both are printed.
 import { demoOptions } from "../../models/demo";
-import { parseDesign, type Design } from "../../models/schema";
+import { parseDesign, type Design } from "../../models/input/schema";
 import { evaluateDesign } from "../../models/evaluate";
 import { sweepGrid, type SweepSpec } from "../../models/sweep";
 import { monteCarlo } from "../../models/spread";

@@ -1,6 +1,6 @@
 import "server-only";
 import Papa from "papaparse";
-import type { Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import { benchParts } from "@/models/fitDesign";
 import type { BenchReadingInput } from "@/models/fitDesign";
 import { BENCH_COLUMNS, MAX_BENCH_ROWS, REQUIRED_BENCH_COLUMNS, benchRowSchema } from "@/lib/bench/schema";

@@ -1,11 +1,13 @@
 import "server-only";
 import crypto from "node:crypto";
 import { getDb } from "@/db/knex";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 import { correlateBench, type BenchCorrelation } from "@/models/fitDesign";
 import { AppError } from "@/lib/errors";
 import type { Member } from "@/services/auth/member";
 import { loadInWorkspace } from "@/services/records";
+import type { ReadUpload } from "@/services/parts/service";
+import { loadRevisionEvaluation } from "@/services/evaluation/revision";
 import { withDocumentValue } from "@/models/fitDesign";
 import { getDesignOptionById } from "@/db/queries/options";
 import { insertRevisionOnBase } from "@/db/queries/option-revisions";
@@ -16,10 +18,17 @@ import { insertStoredFile, newFileId, newObjectKey } from "@/db/queries/files";
 import { getRevisionByNumber } from "@/db/queries/options";
 import { insertBenchRunWithReadings, listBenchReadingsByRun, newBenchRunId, type BenchRunRecord } from "@/db/queries/bench";
 
-function revisionDesign(document: unknown, revision: number) {
-  const parsed = parseDesign(document);
-  if (!parsed.ok) throw new AppError("bad_request", `Revision ${revision} does not evaluate; fix it in the editor first.`, parsed.issues);
-  return parsed.design;
+/**
+ * The measured revision's design and document, through the one loader of a
+ * stored revision. Readings are compared with the document as written
+ * (policy: null): a workspace derating policy changes limits, not
+ * temperatures, and the fit proposes values for this document.
+ */
+async function measuredRevision({ workspaceId, optionId, revision }: { workspaceId: string; optionId: string; revision: number }) {
+  const loaded = await loadRevisionEvaluation({ workspaceId, optionId, revision, policy: null });
+  if (!loaded) return null;
+  if (!loaded.ok) throw new AppError("bad_request", `Revision ${revision} does not evaluate; fix it in the editor first.`, loaded.issues);
+  return { design: loaded.design, document: loaded.revision.document };
 }
 
 function safeCsvFilename(name: string | null): string {
@@ -36,9 +45,9 @@ function safeCsvFilename(name: string | null): string {
 export async function storeBenchUpload({ workspaceId, optionId, revision, userId, filename, bytes }: {
   workspaceId: string; optionId: string; revision: number; userId: string; filename: string | null; bytes: Uint8Array;
 }): Promise<BenchRunRecord> {
-  const rev = await getRevisionByNumber({ workspaceId, optionId, revision });
-  if (!rev) throw new AppError("not_found", `This option has no revision ${revision}.`);
-  const design = revisionDesign(rev.document, revision);
+  const measured = await measuredRevision({ workspaceId, optionId, revision });
+  if (!measured) throw new AppError("not_found", `This option has no revision ${revision}.`);
+  const { design } = measured;
   let text: string;
   try {
     text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
@@ -74,19 +83,17 @@ export interface RunCorrelation {
 
 /** Predicted vs measured and the fit for a stored run, against the revision it was measured on. */
 export async function loadRunCorrelation({ workspaceId, run }: { workspaceId: string; run: BenchRunRecord }): Promise<RunCorrelation> {
-  const rev = await getRevisionByNumber({ workspaceId, optionId: run.optionId, revision: run.revision });
-  if (!rev) throw new AppError("not_found", "Not found.");
+  const measured = await measuredRevision({ workspaceId, optionId: run.optionId, revision: run.revision });
+  if (!measured) throw new AppError("not_found", "Not found.");
   const readings = await listBenchReadingsByRun({ workspaceId, runId: run.id });
-  return { run, document: rev.document, correlation: correlateBench(revisionDesign(rev.document, run.revision), readings) };
+  return { run, document: measured.document, correlation: correlateBench(measured.design, readings) };
 }
 
 /** One door for POST /api/v1/options/:optionId/bench: readings against a revision (the latest when none is named). */
-export async function uploadBenchRun(member: Member, input: { optionId: string; revision?: number; filename: string | null; bytes: Uint8Array }): Promise<BenchRunRecord> {
+export async function uploadBenchRun(member: Member, input: { optionId: string; upload: ReadUpload<{ revision?: number }> }): Promise<BenchRunRecord> {
   const option = await loadInWorkspace(member, (workspaceId) => getDesignOptionById({ workspaceId, optionId: input.optionId }));
-  return storeBenchUpload({
-    workspaceId: member.workspace.id, optionId: option.id, revision: input.revision ?? option.latestRevision, userId: member.user.id,
-    filename: input.filename, bytes: input.bytes,
-  });
+  const { revision, filename, bytes } = await input.upload();
+  return storeBenchUpload({ workspaceId: member.workspace.id, optionId: option.id, revision: revision ?? option.latestRevision, userId: member.user.id, filename, bytes });
 }
 
 export interface AcceptedFit {

@@ -1,5 +1,5 @@
 import "server-only";
-import type { Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import { DEFAULT_MIN_HEADROOM_ABOVE_PLATEAU_V, DEFAULT_TJ_MARGIN_K, DEFAULT_VGS_MAX_FRACTION } from "@/models/policy";
 import { getDeratingByWorkspace, upsertDeratingByWorkspace, type DeratingValues, type WorkspaceDerating } from "@/db/queries/derating";
 import type { DeratingPolicy } from "@/lib/derating/schema";

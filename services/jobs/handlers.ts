@@ -1,19 +1,17 @@
 import "server-only";
 import crypto from "node:crypto";
 import { setImmediate as yieldToEventLoop } from "node:timers/promises";
-import { parseDesign, type Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import { mergeSweepChunks, sweepGrid, type SweepResult, type SweepSpec } from "@/models/sweep";
 import { monteCarlo, type MonteCarloResult } from "@/models/spread";
 import { AppError } from "@/lib/errors";
-import { applyWorkspaceDerating } from "../derating/policy";
-import { getDeratingByWorkspace } from "@/db/queries/derating";
+import { loadRevisionEvaluation } from "@/services/evaluation/revision";
 import { putObject, deleteObject } from "../storage/storage";
 import { controllerHeatmap, loadReportData } from "../reports/data";
 import { renderReportPdf } from "../reports/pdf";
 import { mergeMonteCarlo, batchSeed } from "./monteCarloMerge";
 import { monteCarloJobPayloadSchema, reportJobPayloadSchema, sweepJobPayloadSchema } from "@/lib/jobs/schema";
 import { completeJobById, updateJobProgressById, type JobRecord } from "@/db/queries/jobs";
-import { getRevisionByNumber } from "@/db/queries/options";
 import { insertStoredFile, newFileId, newObjectKey } from "@/db/queries/files";
 
 // The work of each job kind, in chunks: after every chunk the progress and
@@ -27,12 +25,11 @@ const SWEEP_CHECKPOINTS = 10;
 export const MC_BATCH_SAMPLES = 2_000;
 
 async function designOf(job: JobRecord, optionId: string, revision: number): Promise<Design> {
-  const rev = await getRevisionByNumber({ workspaceId: job.workspaceId, optionId, revision });
-  if (!rev) throw new AppError("not_found", `Option revision ${revision} no longer exists.`);
-  const parsed = parseDesign(rev.document);
-  if (!parsed.ok) throw new AppError("bad_request", `Revision ${revision} does not evaluate.`);
   // Limits (sweep contour, Monte Carlo over-limit fractions) follow the workspace policy, as the budget does.
-  return applyWorkspaceDerating(parsed.design, await getDeratingByWorkspace(job.workspaceId));
+  const loaded = await loadRevisionEvaluation({ workspaceId: job.workspaceId, optionId, revision });
+  if (!loaded) throw new AppError("not_found", `Option revision ${revision} no longer exists.`);
+  if (!loaded.ok) throw new AppError("bad_request", `Revision ${revision} does not evaluate.`);
+  return loaded.design;
 }
 
 export async function runSweepJob(job: JobRecord): Promise<void> {

@@ -1,12 +1,11 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
 import type { JobCreate } from "@/lib/jobs/schema";
-import { parseDesign } from "@/models/schema";
 import { SweepSpecError, sweepGrid } from "@/models/sweep";
 import type { Member } from "@/services/auth/member";
 import { loadInWorkspace } from "@/services/records";
 import { enqueueJob } from "@/services/jobs/queue";
-import { getRevisionByNumber } from "@/db/queries/options";
+import { loadRevisionEvaluation } from "@/services/evaluation/revision";
 import type { JobRecord } from "@/db/queries/jobs";
 
 /**
@@ -15,9 +14,8 @@ import type { JobRecord } from "@/db/queries/jobs";
  * row here, so a bad part or axis is a 400 now rather than a failed job later.
  */
 export async function startJob(member: Member, job: JobCreate): Promise<JobRecord> {
-  const rev = await loadInWorkspace(member, (workspaceId) => getRevisionByNumber({ workspaceId, optionId: job.payload.optionId, revision: job.payload.revision }));
-  const parsed = parseDesign(rev.document);
-  if (!parsed.ok) throw new AppError("bad_request", `Revision ${rev.revision} does not evaluate; fix it in the editor.`, parsed.issues);
+  const parsed = await loadInWorkspace(member, (workspaceId) => loadRevisionEvaluation({ workspaceId, optionId: job.payload.optionId, revision: job.payload.revision }));
+  if (!parsed.ok) throw new AppError("bad_request", `Revision ${parsed.revision.revision} does not evaluate; fix it in the editor.`, parsed.issues);
   if (job.kind === "sweep") {
     try {
       sweepGrid(parsed.design, { ...job.payload.spec, rows: { from: 0, to: 1 } });

@@ -1,6 +1,7 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
-import { flattenParams, validatePartDraft, type PartValues } from "@/lib/parts/values";
+import { validatePartDraft, type PartValues } from "@/lib/parts/values";
+import { flattenPaths } from "@/models/documentPath";
 import type { PartPatch } from "@/lib/parts/schema";
 import type { Member } from "@/services/auth/member";
 import { loadInWorkspace } from "@/services/records";
@@ -30,7 +31,7 @@ export async function updatePart(member: Member, input: { partId: string; patch:
     mpn: patch.mpn ?? current.mpn,
     description: patch.description ?? current.description,
     unitCost: patch.unitCost === undefined ? current.unitCost : patch.unitCost,
-    params: flattenParams(patch.params ?? current.params),
+    params: flattenPaths(patch.params ?? current.params),
     tolerance: patch.tolerance ?? current.tolerance,
   });
   if (!r.ok) throw new AppError("bad_request", "Check the request body.", r.issues);
@@ -57,15 +58,12 @@ export async function deletePart(member: Member, input: { partId: string }): Pro
   if (objectKey) await removeObjectQuietly(objectKey);
 }
 
+/** An uploaded file, read (within its limit) only once the record it is for was found: nobody streams a body at another workspace's record. */
+export type ReadUpload<T = object> = () => Promise<T & { filename: string | null; bytes: Uint8Array }>;
+
 /** Stores a PDF (checked by content) as the part's datasheet, replacing the previous one. */
-export async function attachDatasheet(member: Member, input: { partId: string; filename: string | null; bytes: Uint8Array }): Promise<StoredFileRecord> {
+export async function attachDatasheet(member: Member, input: { partId: string; upload: ReadUpload }): Promise<StoredFileRecord> {
   const part = await loadInWorkspace(member, (workspaceId) => getPartById({ workspaceId, id: input.partId }));
-  return replacePartDatasheet({
-    workspaceId: member.workspace.id,
-    partId: part.id,
-    userId: member.user.id,
-    filename: input.filename,
-    bytes: input.bytes,
-    previousFileId: part.datasheet?.id ?? null,
-  });
+  const { filename, bytes } = await input.upload();
+  return replacePartDatasheet({ workspaceId: member.workspace.id, partId: part.id, userId: member.user.id, filename, bytes, previousFileId: part.datasheet?.id ?? null });
 }

@@ -1,11 +1,11 @@
 import "server-only";
-import { parseDesign, type Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import { evaluateDesign, type Evaluation } from "@/models/evaluate";
 import { sweepGrid, type SweepResult } from "@/models/sweep";
 import { AppError } from "@/lib/errors";
-import { applyWorkspaceDerating } from "../derating/policy";
-import { getDeratingByWorkspace, type WorkspaceDerating } from "@/db/queries/derating";
-import { getDesignOptionById, getRevisionByNumber, type OptionRecord, type RevisionRecord } from "@/db/queries/options";
+import { loadRevisionEvaluation } from "@/services/evaluation/revision";
+import type { WorkspaceDerating } from "@/db/queries/derating";
+import { getDesignOptionById, type OptionRecord, type RevisionRecord } from "@/db/queries/options";
 import { getProjectById } from "@/db/queries/projects";
 import { getReviewSummaryByRevision, type ReviewSummary } from "@/db/queries/report-review";
 
@@ -31,21 +31,18 @@ export const REPORT_JOB_MAX_STEPS = 200;
 export async function loadReportData({ workspaceId, optionId, revision }: { workspaceId: string; optionId: string; revision: number }): Promise<ReportData> {
   const option = await getDesignOptionById({ workspaceId, optionId });
   if (!option) throw new AppError("not_found", "Not found.");
-  const rev = await getRevisionByNumber({ workspaceId, optionId: option.id, revision });
-  if (!rev) throw new AppError("not_found", "Not found.");
-  const parsed = parseDesign(rev.document);
-  if (!parsed.ok) throw new AppError("bad_request", `Revision ${revision} does not evaluate; fix it in the editor.`, parsed.issues);
-  const [project, policy] = await Promise.all([getProjectById({ workspaceId, projectId: option.projectId }), getDeratingByWorkspace(workspaceId)]);
-  // The same policy rule as the budget API (app/_lib/budget.ts), so the report shows its numbers.
-  const design = applyWorkspaceDerating(parsed.design, policy);
+  // The one evaluation of a stored revision (services/evaluation/revision.ts): the budget API's numbers.
+  const [loaded, project] = await Promise.all([loadRevisionEvaluation({ workspaceId, optionId: option.id, revision }), getProjectById({ workspaceId, projectId: option.projectId })]);
+  if (!loaded) throw new AppError("not_found", "Not found.");
+  if (!loaded.ok) throw new AppError("bad_request", `Revision ${revision} does not evaluate; fix it in the editor.`, loaded.issues);
   return {
     projectName: project?.name ?? "",
     option,
-    revision: rev,
-    design,
-    evaluation: evaluateDesign(design),
+    revision: loaded.revision,
+    design: loaded.design,
+    evaluation: loaded.evaluation,
     review: await getReviewSummaryByRevision({ optionId: option.id, revision }),
-    workspacePolicy: policy,
+    workspacePolicy: loaded.policy,
     generatedAt: new Date().toISOString(),
   };
 }

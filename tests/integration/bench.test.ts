@@ -9,7 +9,7 @@ import { createProjectWithOption, signedInClient } from "./support/projects";
 import { BENCH_HEADER, readingsAround, templateDesign, toCsv, uploadBench } from "./support/bench";
 import type { Client } from "./support/http";
 import { correlateBench } from "@/models/fitDesign";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 
 let wsA: string;
 let designer: Client, reviewer: Client, viewer: Client, adminB: Client;

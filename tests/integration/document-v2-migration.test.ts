@@ -12,7 +12,7 @@ import { closeTestDb, createWorkspaceWithRoles, testDb, type TestUser } from "./
 import type { Client } from "./support/http";
 import { createProject, signedInClient } from "./support/projects";
 import { demoOptions } from "@/models/demo";
-import { mosfetSchema } from "@/models/schemaParts";
+import { mosfetSchema } from "@/models/input/schemaParts";
 import { partToModelBlock } from "@/lib/parts/modelBlock";
 
 const demoV2 = () => JSON.parse(JSON.stringify(demoOptions.find((o) => o.key === "driver-ic")!.input));

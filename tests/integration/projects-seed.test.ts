@@ -5,7 +5,7 @@ import { closeTestDb, createWorkspaceWithRoles, testDb } from "./support/db";
 import { seedDemoParts } from "@/db/seeds/demo-parts";
 import { DEMO_PROJECT_ID, seedDemoProjects } from "@/db/seeds/demo-projects";
 import { demoOptions } from "@/models/demo";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 
 afterAll(closeTestDb);
 

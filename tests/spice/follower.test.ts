@@ -5,7 +5,8 @@
 // Gummel–Poon cards; the model gets their hFE(Ic) and VBE from an ngspice DC sweep at
 // VCE = 2 V, the way a datasheet plot is measured.
 import { beforeAll, describe, expect, it } from "vitest";
-import { demoOptions, evaluateDesign, type DesignInput } from "@/models";
+import { demoOptions, evaluateDesign } from "@/models";
+import type { DesignInput } from "@/models/input";
 import { runNgspice, valueOf } from "@/simulation/ngspice";
 import { followerNetlist, hfeNetlist, type BjtCard, type FollowerNetwork } from "./netlists";
 import { curveLoad, designOf } from "./fromModel";

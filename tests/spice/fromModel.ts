@@ -1,6 +1,7 @@
 // Circuit values taken from the model's inputs, so ngspice simulates the
 // circuit the model describes. Only inputs cross over here, never results.
-import { chargeAt, parseDesign, type Design, type DesignInput, type GateChargeCurve } from "@/models";
+import { chargeAt, type GateChargeCurve } from "@/models";
+import { parseDesign, type Design, type DesignInput } from "@/models/input";
 import type { GateLoad } from "./netlists";
 
 export function designOf(input: DesignInput): Design {

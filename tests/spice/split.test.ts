@@ -2,7 +2,8 @@
 // Circuit: Q1 of demo option 3 (driver IC HRG-LS9T 2 Ω / 1 Ω, split outputs rTurnOn 2.2 Ω /
 // rTurnOff 1 Ω, Rg(int) 1 Ω, gate charge of QN-150F12), built from the model's inputs.
 import { describe, expect, it } from "vitest";
-import { demoOptions, evaluateDesign, type Design } from "@/models";
+import { demoOptions, evaluateDesign } from "@/models";
+import type { Design } from "@/models/input";
 import { runNgspice, valueOf } from "@/simulation/ngspice";
 import { splitNetlist, type GateLoad, type GateNetwork } from "./netlists";
 import { curveLoad, designOf, integralVdQ, chargeOn } from "./fromModel";

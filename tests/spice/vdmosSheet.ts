@@ -3,7 +3,7 @@
 // "datasheet" the model gets, measured in ngspice itself: a JESD24-2 style
 // gate-charge test (Qgs, Qgd, Qg, Vpl, Ciss from the slope below the
 // plateau) and Vth at 250 µA.
-import type { DesignInput } from "@/models";
+import type { DesignInput } from "@/models/input";
 import { runNgspice, valueOf } from "@/simulation/ngspice";
 import { gateChargeNetlist, thresholdNetlist, type VdmosCard } from "./netlists";
 

@@ -1,6 +1,6 @@
 // The calculator's zod input schema: unit strings in, the calculator's SI spec out.
 import { describe, expect, it } from "vitest";
-import { converterSpecSchema } from "@/models/converter/specSchema";
+import { converterSpecSchema } from "@/models/input/converterSpec";
 import { operatingPoint } from "@/models/converter/calculate";
 import type { ConverterSpec } from "@/models/converter/types";
 

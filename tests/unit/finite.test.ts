@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { assertFinite } from "@/lib/finite";
 import { AppError } from "@/lib/errors";
 import { evaluateDesign } from "@/models/evaluate";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 import { demoOptions } from "@/models/demo";
 
 function caught(v: unknown): AppError | null {

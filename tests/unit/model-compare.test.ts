@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { compareOptions } from "@/models/compare";
 import { designBom } from "@/models/bom";

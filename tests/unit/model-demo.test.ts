@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { demoFollowerHighCurrent, demoOptions, demoParts } from "@/models/demo";
 import { designBom } from "@/models/bom";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { acCoupledLevels, followerCurrent, hfeAt } from "@/models/driveStage";
 import { chargeAt } from "@/models/gateCharge";
-import { parseDesign, type Design, type DesignInput } from "@/models/schema";
+import { parseDesign, type Design, type DesignInput } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 
 type PositionInput = DesignInput["positions"][number];

@@ -3,7 +3,7 @@
 // known, plus seeded noise, must give that resistance back.
 import { describe, expect, it } from "vitest";
 import { demoOptions } from "@/models/demo";
-import { parseDesign, type Design, type DesignInput } from "@/models/schema";
+import { parseDesign, type Design, type DesignInput } from "@/models/input/schema";
 import { buildCornerResult, computeCorner, prepare } from "@/models/evaluate";
 import { createRng } from "@/models/rng";
 import { fitThermalResistance, surfaceTemperature } from "@/models/fit";

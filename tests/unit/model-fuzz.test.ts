@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { parseDesign, type Design } from "@/models/schema";
+import { parseDesign, type Design } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { demoFollowerHighCurrent, demoOptions } from "@/models/demo";
 

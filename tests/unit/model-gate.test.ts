@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { chargeAt, qgs2, scaleCurve, swingCharge } from "@/models/gateCharge";
 import { gateDrivePower, splitByResistance } from "@/models/gatePower";
-import { parseDesign, type DesignInput } from "@/models/schema";
+import { parseDesign, type DesignInput } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 
 const curve = { qgs: 17e-9, qgd: 13e-9, qg: 58e-9, qgVgs: 10, vth: 3, vpl: 4.9 };

@@ -3,7 +3,7 @@
  * Each is "common practice": no published source, the trade's experience.
  */
 import { describe, expect, it } from "vitest";
-import { parseDesign, type Design, type DesignInput } from "@/models/schema";
+import { parseDesign, type Design, type DesignInput } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { hfeAt, peakHfe } from "@/models/driveStage";
 import { controllerHRGPC72, mosfetQN080S3, npnQTN3HC, npnQTN6SL, pnpQTP3HC, pnpQTP6SL } from "@/models/demoParts";

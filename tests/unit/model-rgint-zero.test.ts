@@ -2,7 +2,7 @@
 // resistor): every path that divided by the gate-side resistance stays finite
 // and the gate energy is still all booked.
 import { describe, expect, it } from "vitest";
-import { parseDesign, type Design, type DesignInput } from "@/models/schema";
+import { parseDesign, type Design, type DesignInput } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { npnQTN3HC, pnpQTP3HC } from "@/models/demoParts";
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { designJsonSchema, parseDesign, type DesignInput } from "@/models/schema";
+import { designJsonSchema, parseDesign, type DesignInput } from "@/models/input/schema";
 import { demoOptions } from "@/models/demo";
 
 /** A one-switch design written with unit strings, as a user would. */

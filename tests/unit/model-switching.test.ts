@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { eossAt, hardEdge } from "@/models/switching";
 import { channelLoss, deadTimeLoss, diodeLoss, rdsAt } from "@/models/conduction";
-import { parseDesign, type Design, type DesignInput } from "@/models/schema";
+import { parseDesign, type Design, type DesignInput } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 
 function oneSwitchInput(over: Partial<DesignInput["positions"][number]["conduction"]> = {}): DesignInput {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { singlePartFixedPoint, solveNetwork } from "@/models/thermal";
-import { parseDesign, type Design, type DesignInput } from "@/models/schema";
+import { parseDesign, type Design, type DesignInput } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 
 function conductionOnly({ iRms, rthJA, ambient = 40 }: { iRms: number; rthJA: number; ambient?: number }): Design {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { formatQuantity, parseQuantity, qty } from "@/models/units";
+import { formatQuantity, parseQuantity, qty } from "@/models/input/units";
 
 describe("parseQuantity (unit strings at the model edge, SI inside)", () => {
   it.each([

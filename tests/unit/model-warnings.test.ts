@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { parseDesign, type Design, type DesignInput } from "@/models/schema";
+import { parseDesign, type Design, type DesignInput } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { npnQTN6SL, pnpQTP6SL } from "@/models/demoParts";
 

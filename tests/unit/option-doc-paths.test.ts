@@ -1,7 +1,8 @@
 // The editor's document plumbing: path reads and immutable writes, the
 // re-apply after a save conflict, and copying a library part into a block.
 import { describe, expect, it } from "vitest";
-import { changedPaths, getAt, reapplyEdits, reapplyFlat, setAt } from "@/lib/docPaths";
+import { getAt, setAt } from "@/models/documentPath";
+import { changedPaths, reapplyEdits, reapplyFlat } from "@/lib/docPaths";
 import { applyPartBlock, partSlots } from "@/lib/parts/slots";
 import { demoOptions } from "@/models/demo";
 

@@ -5,7 +5,7 @@ import { columnOfPath, parsePartsCsv, serializePartsCsv } from "@/lib/parts/csv"
 import { validatePartDraft } from "@/lib/parts/values";
 import { formatExact, parseHfeCurve, parseVoltSecond } from "@/lib/parts/paramText";
 import { partToModelBlock } from "@/lib/parts/modelBlock";
-import { bjtSchema, mosfetSchema } from "@/models/schemaParts";
+import { bjtSchema, mosfetSchema } from "@/models/input/schemaParts";
 import { demoPartValues } from "@/db/seeds/demo-parts";
 import { PART_KINDS } from "@/lib/parts/kinds";
 

@@ -5,7 +5,7 @@
 import { describe, expect, it } from "vitest";
 import v1DriverIc from "../fixtures/demo-driver-ic-v1.json";
 import { upgradeDesignDocument } from "@/models/schemaUpgrade";
-import { designInputSchema, parseDesign, type Design } from "@/models/schema";
+import { designInputSchema, parseDesign, type Design } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { demoOptions } from "@/models/demo";
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { demoOptions, evaluateDesign, parseDesign, type Design } from "@/models";
+import { demoOptions, evaluateDesign } from "@/models";
+import { parseDesign, type Design } from "@/models/input";
 import { COMMON_PRACTICE_TOLERANCE, monteCarlo, monteCarloDesigns } from "@/models/spread";
 import { createRng } from "@/models/rng";
 

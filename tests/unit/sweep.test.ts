@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { demoOptions, evaluateDesign, parseDesign, type Design } from "@/models";
+import { demoOptions, evaluateDesign } from "@/models";
+import { parseDesign, type Design } from "@/models/input";
 import { contourOf, mergeSweepChunks, sweepGrid, SweepSpecError, type SweepAxis, type SweepSpec } from "@/models/sweep";
 
 function demo(key: string): Design {

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { groupWarnings } from "@/models/warningGroups";
 import type { Warning } from "@/models/warnings";
 import { evaluateDesign } from "@/models/evaluate";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 import { demoOptions } from "@/models/demo";
 
 const w = (cornerId: string, severity: Warning["severity"], code = "vgs-near-max", partId = "q1"): Warning =>

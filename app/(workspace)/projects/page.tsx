@@ -3,7 +3,7 @@ import Link from "next/link";
 import { requirePageMember } from "@/app/_lib/access";
 import { can } from "@/lib/roles";
 import { listProjectsByWorkspace } from "@/db/queries/projects";
-import { formatQuantity } from "@/models/units";
+import { formatQuantity } from "@/models/input/units";
 import { Badge, EmptyState, LinkButton, PageHeader, Pagination, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
 import { defaultDirection, projectListQuerySchema, STATUS_LABELS, TOPOLOGY_LABELS, type ProjectListQuery, type ProjectSort } from "@/lib/projects/schema";
 import { ProjectFilters } from "./_components/ProjectFilters";

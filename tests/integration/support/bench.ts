@@ -1,6 +1,6 @@
 // Bench uploads for the integration tests and the role matrix: multipart
 // POSTs with the client's cookies (the small Client speaks JSON and forms only).
-import { parseDesign, type Design } from "@/models/schema";
+import { parseDesign, type Design } from "@/models/input/schema";
 import { correlateBench, type BenchReadingInput } from "@/models/fitDesign";
 import { ORIGIN, type Client } from "./http";
 import { templateInput } from "./projects";

@@ -4,7 +4,7 @@ import { requirePageMember } from "@/app/_lib/access";
 import { can } from "@/lib/roles";
 import { PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, type ToleranceKey } from "@/lib/parts/kinds";
 import { formatParamValue } from "@/lib/parts/paramText";
-import { getPath } from "@/lib/parts/values";
+import { getAt } from "@/models/documentPath";
 import { MAX_DATASHEET_BYTES } from "@/lib/limits";
 import { getPartById } from "@/db/queries/parts";
 import { Badge, Caution, PageHeader } from "@/components/ui";
@@ -41,7 +41,7 @@ export default async function PartPage({ params }: { params: Promise<{ partId: s
               {fields.map((f) => (
                 <div key={f.key} className="flex justify-between gap-4 border-b border-paper-line py-1">
                   <dt className="text-ink-soft">{f.label}</dt>
-                  <dd className="font-mono tabular-nums">{formatParamValue(f, getPath(part.params, f.key))}</dd>
+                  <dd className="font-mono tabular-nums">{formatParamValue(f, getAt(part.params, f.key))}</dd>
                 </div>
               ))}
               {Object.entries(part.tolerance).map(([k, v]) => (

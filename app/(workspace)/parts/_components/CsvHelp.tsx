@@ -1,5 +1,5 @@
 import { PART_KINDS, PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, allParamAliases } from "@/lib/parts/kinds";
-import { DIMENSIONS } from "@/models/units";
+import { DIMENSIONS } from "@/models/input/units";
 import { MAX_IMPORT_ROWS } from "@/lib/parts/csv";
 
 function example(f: (typeof PART_KIND_DEFS)["mosfet"]["fields"][number]): string {

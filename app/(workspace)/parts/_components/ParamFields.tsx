@@ -2,7 +2,7 @@
 
 import { Select } from "@/components/ui";
 import { PART_KIND_DEFS, TOLERANCE_LABELS, type PartKind } from "@/lib/parts/kinds";
-import { DIMENSIONS } from "@/models/units";
+import { DIMENSIONS } from "@/models/input/units";
 import { QuantityField } from "./QuantityField";
 import { normaliseParam, normaliseTolerance } from "./normalise";
 

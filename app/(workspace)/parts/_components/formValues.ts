@@ -1,6 +1,7 @@
 import { PART_KIND_DEFS, type PartKind } from "@/lib/parts/kinds";
 import { formatForInput, formatPercent } from "@/lib/parts/paramText";
-import { getPath, type PartValues } from "@/lib/parts/values";
+import { type PartValues } from "@/lib/parts/values";
+import { getAt } from "@/models/documentPath";
 import type { PartFormValues } from "./PartForm";
 
 export function emptyFormValues(kind: PartKind = "mosfet"): PartFormValues {
@@ -11,7 +12,7 @@ export function emptyFormValues(kind: PartKind = "mosfet"): PartFormValues {
 export function formValuesOf(part: PartValues): PartFormValues {
   const params: Record<string, string> = {};
   for (const f of PART_KIND_DEFS[part.kind].fields) {
-    const v = getPath(part.params, f.key);
+    const v = getAt(part.params, f.key);
     if (v !== undefined) params[f.key] = formatForInput(f, v);
   }
   const tolerance: Record<string, string> = {};

@@ -3,7 +3,7 @@
  * runs (models/units.ts qty, the hFE and volt-second readers), so "0.047 µC"
  * becomes "47 nC" on blur and "47 V" in a charge field is refused there.
  */
-import { qty } from "@/models/units";
+import { qty } from "@/models/input/units";
 import type { ParamField } from "@/lib/parts/kinds";
 import { formatForInput, formatPercent, parseHfeCurve, parseVoltSecond } from "@/lib/parts/paramText";
 

@@ -1,6 +1,7 @@
 import { PART_KIND_DEFS, fieldOf, type PartKind } from "@/lib/parts/kinds";
 import { formatParamValue } from "@/lib/parts/paramText";
-import { getPath, type PartParams } from "@/lib/parts/values";
+import { type PartParams } from "@/lib/parts/values";
+import { getAt } from "@/models/documentPath";
 
 /** The figures a table row shows per kind: what an engineer scans for first. */
 const SUMMARY_KEYS: Record<PartKind, string[]> = {
@@ -16,7 +17,7 @@ const SUMMARY_KEYS: Record<PartKind, string[]> = {
 export function summaryOf(kind: PartKind, params: PartParams): { label: string; text: string }[] {
   return SUMMARY_KEYS[kind].flatMap((key) => {
     const f = fieldOf(kind, key);
-    const v = getPath(params, key);
+    const v = getAt(params, key);
     return f && v !== undefined ? [{ label: f.label, text: formatParamValue(f, v) }] : [];
   });
 }
@@ -24,6 +25,6 @@ export function summaryOf(kind: PartKind, params: PartParams): { label: string; 
 /** The filtered parameter's value for the extra table column. */
 export function paramText(kind: PartKind, params: PartParams, key: string): string {
   const f = PART_KIND_DEFS[kind].fields.find((x) => x.key === key);
-  const v = getPath(params, key);
+  const v = getAt(params, key);
   return f && v !== undefined ? formatParamValue(f, v) : "—";
 }

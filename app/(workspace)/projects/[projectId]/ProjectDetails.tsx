@@ -3,7 +3,7 @@
 import { useRef, useState } from "react";
 import useSWR from "swr";
 import { Button, FormMessage, Panel } from "@/components/ui";
-import { formatQuantity } from "@/models/units";
+import { formatQuantity } from "@/models/input/units";
 import type { ProjectRecord } from "@/db/queries/projects";
 import { projectInputSchema, STATUS_LABELS, TOPOLOGY_LABELS } from "@/lib/projects/schema";
 import { ProjectFields, projectFormObject } from "../_components/ProjectFields";

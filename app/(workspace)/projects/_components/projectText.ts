@@ -1,4 +1,4 @@
-import { formatQuantity } from "@/models/units";
+import { formatQuantity } from "@/models/input/units";
 import type { ProjectFormText } from "./ProjectFields";
 
 interface ProjectLike {

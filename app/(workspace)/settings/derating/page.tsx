@@ -3,7 +3,7 @@ import { requirePageMember } from "@/app/_lib/access";
 import { can } from "@/lib/roles";
 import { MODEL_DEFAULT_DERATING } from "@/services/derating/policy";
 import { getDeratingByWorkspace } from "@/db/queries/derating";
-import { formatQuantity } from "@/models/units";
+import { formatQuantity } from "@/models/input/units";
 import { PART_TYPES } from "@/models/policy";
 import { Badge, Caution, PageHeader, Panel } from "@/components/ui";
 import { DeratingForm, type DeratingFormValues } from "./DeratingForm";

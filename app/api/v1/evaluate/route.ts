@@ -1,7 +1,8 @@
 import { z } from "zod";
 import { route } from "@/app/_lib/access";
 import { assertFinite } from "@/lib/finite";
-import { compareOptions, designInputSchema, evaluateDesign } from "@/models";
+import { compareOptions, evaluateDesign } from "@/models";
+import { designInputSchema } from "@/models/input";
 
 // POST a design option document (unit strings or SI numbers); answers the
 // full budget. With `baseline`, also the comparison figure: how many watts

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { route } from "@/app/_lib/access";
 import { AppError } from "@/lib/errors";
 import { assertFinite } from "@/lib/finite";
-import { designInputSchema } from "@/models";
+import { designInputSchema } from "@/models/input";
 import { monteCarlo } from "@/models/spread";
 
 // POST { design, samples, seed, corner? }: seeded Monte Carlo over part

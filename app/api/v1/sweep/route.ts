@@ -2,8 +2,8 @@ import { z } from "zod";
 import { route } from "@/app/_lib/access";
 import { AppError } from "@/lib/errors";
 import { assertFinite } from "@/lib/finite";
-import { designInputSchema } from "@/models";
-import { sweepSpecSchema } from "@/models/sweepSchema";
+import { designInputSchema } from "@/models/input";
+import { sweepSpecSchema } from "@/models/input/sweepSchema";
 import { SweepSpecError, sweepGrid } from "@/models/sweep";
 
 // POST { design, spec }: one metric of one part over a two-axis grid, with

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { loadProjectBudgets } from "@/services/evaluation/budget";
+import { loadProjectEvaluations } from "@/services/evaluation/revision";
 import { can } from "@/lib/roles";
 import { getProjectById } from "@/db/queries/projects";
 import { listChoicesByProject } from "@/db/queries/choices";
@@ -25,7 +25,7 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   const search = await searchParams;
   const project = await loadPageInWorkspace(member, (workspaceId) => getProjectById({ workspaceId, projectId }));
   const workspaceId = member.workspace.id;
-  const all = await loadProjectBudgets({ workspaceId, projectId: project.id });
+  const all = await loadProjectEvaluations({ workspaceId, projectId: project.id });
   const evaluable = all.filter((x) => x.budget?.ok);
   const wanted = asList(search.o).filter((id) => evaluable.some((x) => x.option.id === id));
   const picked = (wanted.length >= MIN_COMPARED ? wanted : evaluable.map((x) => x.option.id)).slice(0, MAX_COMPARED);
@@ -37,7 +37,7 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   const list = chosen.map(({ option, budget }) => {
     if (!budget?.ok) throw new Error("unreachable: filtered to evaluable budgets");
     const bill = driveChainBill(budget.design);
-    return { id: option.id, name: option.name, evaluation: budget.evaluation, partCount: bill.partCount, cost: bill.cost, bill, revision: budget.revision };
+    return { id: option.id, name: option.name, evaluation: budget.evaluation, partCount: bill.partCount, cost: bill.cost, bill, revision: budget.revision.revision };
   });
   const rows = baselineId ? compareOptions(list, baselineId) : [];
 

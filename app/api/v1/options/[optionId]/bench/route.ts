@@ -17,9 +17,12 @@ export const GET = route({ permission: "read", params: benchParamsSchema }, asyn
 //   -> 201 { run } | 400 with one issue per bad row (nothing stored)
 export const POST = route({ permission: "bench:write", params: benchParamsSchema }, async ({ member, params, req }) => {
   const tooLarge = () => new AppError("payload_too_large", `A bench file may be at most ${MAX_BENCH_BYTES / 1024} kB.`);
-  const { form, file, bytes } = await readMultipartFile(req, { maxBytes: MAX_BENCH_BYTES, tooLarge, what: "CSV", missingIssues: [{ path: "file", message: "choose a CSV file" }] });
-  if (bytes.includes(0)) throw new AppError("bad_request", "The file contains NUL bytes; send a CSV text file.", [{ path: "file", message: "contains a NUL (U+0000) character" }]);
-  const fields = benchUploadFieldsSchema.safeParse({ revision: form.get("revision") ?? undefined });
-  if (!fields.success) throw new AppError("bad_request", "Check the form.", fields.error.issues.map((i) => ({ path: i.path.join("."), message: i.message })));
-  return reply({ run: await uploadBenchRun(member, { optionId: params.optionId, revision: fields.data.revision, filename: file.name, bytes }) }, 201);
+  const upload = async () => {
+    const { form, file, bytes } = await readMultipartFile(req, { maxBytes: MAX_BENCH_BYTES, tooLarge, what: "CSV", missingIssues: [{ path: "file", message: "choose a CSV file" }] });
+    if (bytes.includes(0)) throw new AppError("bad_request", "The file contains NUL bytes; send a CSV text file.", [{ path: "file", message: "contains a NUL (U+0000) character" }]);
+    const fields = benchUploadFieldsSchema.safeParse({ revision: form.get("revision") ?? undefined });
+    if (!fields.success) throw new AppError("bad_request", "Check the form.", fields.error.issues.map((i) => ({ path: i.path.join("."), message: i.message })));
+    return { revision: fields.data.revision, filename: file.name, bytes };
+  };
+  return reply({ run: await uploadBenchRun(member, { optionId: params.optionId, upload }) }, 201);
 });

@@ -13,8 +13,11 @@ import { readMultipartFile } from "@/app/_lib/uploads";
 // Replaces the previous datasheet.
 export const POST = route({ permission: "part:write", params: partParamsSchema }, async ({ member, params, req }) => {
   const tooLarge = () => new AppError("payload_too_large", `A datasheet may be at most ${MAX_DATASHEET_BYTES / (1024 * 1024)} MB.`);
-  const { file, bytes } = await readMultipartFile(req, { maxBytes: MAX_DATASHEET_BYTES, tooLarge, what: "PDF" });
-  const stored = await attachDatasheet(member, { partId: params.partId, filename: file.name, bytes });
+  const upload = async () => {
+    const { file, bytes } = await readMultipartFile(req, { maxBytes: MAX_DATASHEET_BYTES, tooLarge, what: "PDF" });
+    return { filename: file.name, bytes };
+  };
+  const stored = await attachDatasheet(member, { partId: params.partId, upload });
   return reply({ datasheet: { id: stored.id, filename: stored.filename, sizeBytes: stored.sizeBytes, sha256: stored.sha256 } }, 201);
 });
 

@@ -4,7 +4,7 @@ import { useEffect, useMemo, useState } from "react";
 import { useAfterChange } from "@/components/data/useAfterChange";
 import { Button, Panel } from "@/components/ui";
 import type { OptionRecord } from "@/db/queries/options";
-import { getAt } from "@/lib/docPaths";
+import { getAt } from "@/models/documentPath";
 import { fetchJson } from "@/lib/api-client";
 import { EditorContext, type EditorApi } from "./EditorContext";
 import { ChainDiagram } from "./ChainDiagram";

@@ -2,7 +2,7 @@
 
 import { useEffect, useState } from "react";
 import { TextInput } from "@/components/ui";
-import { DIMENSIONS, formatQuantity, parseQuantity, type Dimension } from "@/models/units";
+import { DIMENSIONS, formatQuantity, parseQuantity, type Dimension } from "@/models/input/units";
 
 /** Digits kept when a typed value is rewritten in canonical form ("0.0068 kΩ" -> "6.8 Ω"). */
 const NORMALISE_DIGITS = 6;

@@ -5,7 +5,7 @@
  * every parameter), minus library-only figures the model's strict schemas
  * would refuse.
  */
-import type { Dimension } from "@/models/units";
+import type { Dimension } from "@/models/input/units";
 import { PART_KIND_DEFS, type PartKind } from "@/lib/parts/kinds";
 
 export type EditorField =

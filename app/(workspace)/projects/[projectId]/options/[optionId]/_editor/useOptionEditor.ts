@@ -1,10 +1,11 @@
 "use client";
 
 import { useCallback, useMemo, useState } from "react";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 import type { PartRefs } from "@/db/queries/options";
 import { ApiError, fetchJson, issuesByPath } from "@/lib/api-client";
-import { getAt, reapplyEdits, reapplyFlat, setAt } from "@/lib/docPaths";
+import { getAt, setAt } from "@/models/documentPath";
+import { reapplyEdits, reapplyFlat } from "@/lib/docPaths";
 
 export interface Snapshot {
   revision: number;

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
-import { loadOptionBudget, loadProjectBudgets } from "@/services/evaluation/budget";
+import { loadLatestEvaluation, loadProjectEvaluations } from "@/services/evaluation/revision";
 import { can } from "@/lib/roles";
 import { getDesignOptionById } from "@/db/queries/options";
 import { getProjectById } from "@/db/queries/projects";
@@ -19,7 +19,7 @@ export default async function BudgetPage({ params }: { params: Promise<{ project
   const option = await loadPageInWorkspace(member, (workspaceId) => getDesignOptionById({ workspaceId, optionId }));
   if (option.projectId !== project.id) notFound();
   const workspaceId = member.workspace.id;
-  const budget = await loadOptionBudget({ workspaceId, option });
+  const budget = await loadLatestEvaluation({ workspaceId, option });
   if (!budget) notFound();
   const editor = editorHref({ projectId: project.id, optionId: option.id });
 
@@ -28,7 +28,7 @@ export default async function BudgetPage({ params }: { params: Promise<{ project
       title={option.name}
       subtitle={`Loss and thermal budget of the gate-drive chain, every corner. ${project.name}.`}
       back={{ href: `/projects/${project.id}`, label: project.name }}
-      meta={<Badge tone="info">rev {budget.revision}</Badge>}
+      meta={<Badge tone="info">rev {budget.revision.revision}</Badge>}
       actions={
         <>
           <LinkButton href={`/projects/${project.id}/compare`}>Compare options</LinkButton>
@@ -54,7 +54,7 @@ export default async function BudgetPage({ params }: { params: Promise<{ project
     );
 
   // What every option of the project does to the controller, for the controller panel.
-  const siblings = await loadProjectBudgets({ workspaceId, projectId: project.id });
+  const siblings = await loadProjectEvaluations({ workspaceId, projectId: project.id });
   const options = siblings.map(({ option: o, budget: b }) => ({
     optionId: o.id,
     name: o.name,
@@ -66,14 +66,14 @@ export default async function BudgetPage({ params }: { params: Promise<{ project
   return (
     <>
       {header}
-      <ReportLinks optionId={option.id} revision={budget.revision} benchHref={`/projects/${project.id}/options/${option.id}/bench`} />
+      <ReportLinks optionId={option.id} revision={budget.revision.revision} benchHref={`/projects/${project.id}/options/${option.id}/bench`} />
       <BudgetView
         projectId={project.id}
         optionId={option.id}
         optionName={option.name}
-        revision={budget.revision}
-        document={budget.document}
-        partRefs={budget.partRefs}
+        revision={budget.revision.revision}
+        document={budget.revision.document}
+        partRefs={budget.revision.partRefs}
         design={budget.design}
         evaluation={budget.evaluation}
         options={options}

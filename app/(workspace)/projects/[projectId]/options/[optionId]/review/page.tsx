@@ -2,12 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { loadPageInWorkspace, requirePageMember } from "@/app/_lib/access";
 import { can } from "@/lib/roles";
-import { applyWorkspaceDerating } from "@/services/derating/policy";
-import { getDesignOptionById, getRevisionByNumber } from "@/db/queries/options";
+import { loadRevisionEvaluation } from "@/services/evaluation/revision";
+import { getDesignOptionById } from "@/db/queries/options";
 import { listReviewsByOption } from "@/db/queries/reviews";
-import { getDeratingByWorkspace } from "@/db/queries/derating";
-import { parseDesign } from "@/models/schema";
-import { evaluateDesign } from "@/models/evaluate";
 import { Badge, Caution, PageHeader, Panel, Table, TBody, THead, Td, Th, Tr } from "@/components/ui";
 import { DecisionForm, SubmitReviewForm } from "./ReviewForms";
 import { ReviewHistory, STATUS_TEXT } from "./ReviewHistory";
@@ -28,10 +25,9 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const workspaceId = member.workspace.id;
   const wanted = Number(search.revision);
   const shown = Number.isInteger(wanted) && wanted >= 1 && wanted <= option.latestRevision ? wanted : option.latestRevision;
-  const [reviews, rev, policy] = await Promise.all([listReviewsByOption({ workspaceId, optionId: option.id }), getRevisionByNumber({ workspaceId, optionId: option.id, revision: shown }), getDeratingByWorkspace(workspaceId)]);
+  const [reviews, loaded] = await Promise.all([listReviewsByOption({ workspaceId, optionId: option.id }), loadRevisionEvaluation({ workspaceId, optionId: option.id, revision: shown })]);
   const review = reviews.find((r) => r.revision === shown) ?? null;
-  const parsed = rev ? parseDesign(rev.document) : null;
-  const evaluation = parsed?.ok ? evaluateDesign(applyWorkspaceDerating(parsed.design, policy)) : null;
+  const evaluation = loaded?.ok ? loaded.evaluation : null;
   const junctions = evaluation?.parts.filter((p) => p.junction) ?? [];
   const canSubmit = can(member.role, "option:submit") && !review && shown === option.latestRevision;
   const canDecide = can(member.role, "option:review") && review?.status === "submitted" && review.submittedBy?.id !== member.user.id;
@@ -46,7 +42,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
         meta={review ? <Badge tone={STATUS_TEXT[review.status].tone}>{STATUS_TEXT[review.status].label}</Badge> : <Badge>not submitted</Badge>}
       />
       <div className="flex flex-col gap-6">
-        <Panel title={`Revision ${shown}`} description={rev?.note ? `Note: ${rev.note}` : undefined}>
+        <Panel title={`Revision ${shown}`} description={loaded?.revision.note ? `Note: ${loaded.revision.note}` : undefined}>
           {canSubmit && <SubmitReviewForm optionId={option.id} revision={shown} />}
           {!review && !canSubmit && <p className="text-sm text-ink-soft">{shown === option.latestRevision ? "Not submitted yet; a designer submits it." : "An older revision that was never submitted."}</p>}
           {review?.status === "submitted" && !canDecide && (
@@ -61,7 +57,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
           {canDecide && <DecisionForm optionId={option.id} revision={shown} partIds={junctions.map((p) => p.id)} />}
         </Panel>
 
-        <Panel title="Margins under the workspace policy" description={policy ? "Derated limits from the workspace derating policy, worst corner per part." : "No workspace policy is set: the document's own derating applies."} flush>
+        <Panel title="Margins under the workspace policy" description={loaded?.ok && loaded.policy ? "Derated limits from the workspace derating policy, worst corner per part." : "No workspace policy is set: the document's own derating applies."} flush>
           {evaluation ? (
             <Table caption="Junction margins">
               <THead>

@@ -1,13 +1,16 @@
 /**
- * What-if knobs on a design document: read the current values, and write
- * new ones into a copy of the raw document (SI numbers, which the schema
- * accepts beside unit strings). The same writes applied to the server's
- * parsed design give the trial design the dashboard evaluates with the same
- * models code the server runs, so the browser needs neither the schema nor
- * the unit parser; `trialIssues` applies the schema's bounds for the four
- * knobs, and the server validates the raw copy again when "Save as new
- * revision" sends it. Unit tests hold the trial design equal to a parse of
- * the raw copy. Pure.
+ * What-if knobs (components/budget/WhatIf.tsx draws them): read the current
+ * values from the parsed design, and turn new values into ONE list of edits,
+ * each an SI number at a document path. The edits are the trial: written
+ * into a copy of the raw document (the schema accepts SI numbers beside unit
+ * strings) they are what "Save as new revision" sends, and written into the
+ * server's parsed design (whose paths are the document's) they give the
+ * trial design the dashboard evaluates with the same models code the server
+ * runs, so the browser needs neither the schema nor the unit parser. Both
+ * writes go through models/documentPath.ts; `trialIssues` checks the edits
+ * against the schema's bounds, and the server validates the raw copy again
+ * on save. A unit test holds the trial design equal to a parse of the
+ * edited document. Pure.
  *
  * Choices (documented in the help text):
  *  - fsw and ambient move every corner together: fsw is scaled by one
@@ -21,12 +24,10 @@
  *    transformer's vPos, otherwise the controller's Vcc (which also feeds
  *    every other stage that defaults to it).
  */
-import type { Design } from "@/models/schema";
+import type { Design } from "@/models/input/schema";
 import { AMBIENT_RANGE_C, FSW_RANGE_HZ } from "@/models/bounds";
 import { DIMENSIONS, formatQuantity, type Dimension } from "@/models/quantityFormat";
-
-type Json = unknown;
-type Obj = Record<string, Json>;
+import { getAt, setAt } from "@/models/documentPath";
 
 export interface Knobs {
   fsw: number;
@@ -55,66 +56,49 @@ export function knobTargets(design: Design, positionIndex: number): KnobTargets 
   return { positionIndex, positionId: p.id, driveElement, rOnElement: `positions.${positionIndex}.gate.rTurnOn` };
 }
 
-function get(design: unknown, path: string): number | undefined {
-  let cur: Json = design;
-  for (const k of path.split(".")) {
-    if (cur === null || typeof cur !== "object") return undefined;
-    cur = (cur as Obj)[k];
-  }
-  return typeof cur === "number" ? cur : undefined;
-}
-
 /** Current knob values, read from the parsed (SI) design. */
 export function readKnobs(design: Design, t: KnobTargets): Knobs {
   return {
     fsw: design.corners[0].fsw,
     ambient: Math.max(...design.corners.map((c) => c.ambient)),
     rOn: design.positions[t.positionIndex].gate.rTurnOn,
-    driveVoltage: t.driveElement ? (get(design, t.driveElement) ?? null) : null,
+    driveVoltage: t.driveElement ? numberAt(design, t.driveElement) : null,
   };
 }
 
-function clone<T>(v: T): T {
-  return JSON.parse(JSON.stringify(v)) as T;
+const numberAt = (doc: unknown, path: string): number | null => {
+  const v = getAt(doc, path);
+  return typeof v === "number" ? v : null;
+};
+
+/** One knob's write: an SI value at a document path. */
+export interface TrialEdit {
+  path: string;
+  value: number;
 }
 
-function setNumber(doc: Obj, path: string, value: number): void {
-  const keys = path.split(".");
-  let cur: Obj = doc;
-  for (const k of keys.slice(0, -1)) {
-    const next = cur[k];
-    if (next === null || typeof next !== "object") throw new Error(`no element "${path}" in the document`);
-    cur = next as Obj;
-  }
-  cur[keys[keys.length - 1]] = value;
-}
-
-/**
- * A copy of the raw document with the knobs applied. `design` is the parsed
- * original (SI values to scale from); the raw document keeps every field
- * the knobs do not touch exactly as the user typed it.
- */
-export function applyKnobs(document: unknown, design: Design, t: KnobTargets, knobs: Knobs): unknown {
-  const doc = clone(document) as Obj;
+/** The knobs as edits, computed once from the parsed original (SI values to scale from). */
+export function knobEdits(design: Design, t: KnobTargets, knobs: Knobs): TrialEdit[] {
+  const edits: TrialEdit[] = [];
   const now = readKnobs(design, t);
   const fswFactor = now.fsw > 0 ? knobs.fsw / now.fsw : 1;
   const ambientShift = knobs.ambient - now.ambient;
   design.corners.forEach((c, i) => {
-    if (fswFactor !== 1) setNumber(doc, `corners.${i}.fsw`, c.fsw * fswFactor);
-    if (ambientShift !== 0) setNumber(doc, `corners.${i}.ambient`, c.ambient + ambientShift);
+    if (fswFactor !== 1) edits.push({ path: `corners.${i}.fsw`, value: c.fsw * fswFactor });
+    if (ambientShift !== 0) edits.push({ path: `corners.${i}.ambient`, value: c.ambient + ambientShift });
   });
   const gate = design.positions[t.positionIndex].gate;
   if (knobs.rOn !== null && now.rOn !== null && knobs.rOn !== now.rOn) {
-    setNumber(doc, t.rOnElement, knobs.rOn);
-    if (gate.rTurnOff !== undefined && now.rOn > 0) setNumber(doc, `positions.${t.positionIndex}.gate.rTurnOff`, (gate.rTurnOff * knobs.rOn) / now.rOn);
+    edits.push({ path: t.rOnElement, value: knobs.rOn });
+    if (gate.rTurnOff !== undefined && now.rOn > 0) edits.push({ path: `positions.${t.positionIndex}.gate.rTurnOff`, value: (gate.rTurnOff * knobs.rOn) / now.rOn });
   }
-  if (t.driveElement && knobs.driveVoltage !== null && knobs.driveVoltage !== now.driveVoltage) setNumber(doc, t.driveElement, knobs.driveVoltage);
-  return doc;
+  if (t.driveElement && knobs.driveVoltage !== null && knobs.driveVoltage !== now.driveVoltage) edits.push({ path: t.driveElement, value: knobs.driveVoltage });
+  return edits;
 }
 
-/** The parsed design with the knobs applied: what parseDesign(applyKnobs(document, ...)) gives, without parsing. */
-export function applyKnobsToDesign(design: Design, t: KnobTargets, knobs: Knobs): Design {
-  return applyKnobs(design, design, t, knobs) as Design;
+/** A copy of `doc` (the raw document, or the parsed design) with the edits written; every other field as it was. */
+export function withEdits<T>(doc: T, edits: readonly TrialEdit[]): T {
+  return edits.reduce<unknown>((d, e) => setAt(d, e.path, e.value), doc) as T;
 }
 
 /**
@@ -122,21 +106,20 @@ export function applyKnobsToDesign(design: Design, t: KnobTargets, knobs: Knobs)
  * ("path: message"); empty when they would. The bounds are the schema's own
  * (models/bounds.ts, and the plausibility range of each dimension).
  */
-export function trialIssues(design: Design, t: KnobTargets, knobs: Knobs): string[] {
+export function trialIssues(edits: readonly TrialEdit[]): string[] {
   const issues: string[] = [];
-  const now = readKnobs(design, t);
   /** The schema's rule for one value: at least `min` (above it when `above`), at most `max`. */
   const check = (path: string, v: number, dim: Dimension, min: number, max: number, above = false) => {
     if (Number.isFinite(v) && (above ? v > min : v >= min) && v <= max) return;
     issues.push(`${path}: must be ${above ? "above" : "at least"} ${formatQuantity(min, dim)} and at most ${formatQuantity(max, dim)}, got ${formatQuantity(v, dim, 4)}`);
   };
-  const fswFactor = now.fsw > 0 ? knobs.fsw / now.fsw : 1;
-  design.corners.forEach((c, i) => {
-    check(`corners.${i}.fsw`, c.fsw * fswFactor, "frequency", FSW_RANGE_HZ.min, FSW_RANGE_HZ.max);
-    check(`corners.${i}.ambient`, c.ambient + (knobs.ambient - now.ambient), "temperature", AMBIENT_RANGE_C.min, AMBIENT_RANGE_C.max);
-  });
-  if (knobs.rOn !== null) check(t.rOnElement, knobs.rOn, "resistance", DIMENSIONS.resistance.min, DIMENSIONS.resistance.max);
-  if (t.driveElement && knobs.driveVoltage !== null) check(t.driveElement, knobs.driveVoltage, "voltage", 0, DIMENSIONS.voltage.max, true);
+  for (const { path, value } of edits) {
+    const leaf = path.slice(path.lastIndexOf(".") + 1);
+    if (path.startsWith("corners.") && leaf === "fsw") check(path, value, "frequency", FSW_RANGE_HZ.min, FSW_RANGE_HZ.max);
+    else if (path.startsWith("corners.") && leaf === "ambient") check(path, value, "temperature", AMBIENT_RANGE_C.min, AMBIENT_RANGE_C.max);
+    else if (leaf === "rTurnOn" || leaf === "rTurnOff") check(path, value, "resistance", DIMENSIONS.resistance.min, DIMENSIONS.resistance.max);
+    else check(path, value, "voltage", 0, DIMENSIONS.voltage.max, true); // a drive rail
+  }
   return issues;
 }
 

@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { parseDesign } from "@/models/schema";
+import { parseDesign } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { demoOptions } from "@/models/demo";
 import { mergeSweepChunks, sweepGrid } from "@/models/sweep";
-import { toModelSpec, type SweepSpec } from "./sweepAxes";
+import { toModelSpec, type SweepSpec } from "@/components/charts/sweepAxes";
 
 const parsed = parseDesign(demoOptions[0].input);
 if (!parsed.ok) throw new Error("demo does not parse");

@@ -14,13 +14,13 @@ import { qty } from "./units";
 import { controllerSchema, mosfetSchema } from "./schemaParts";
 import { driveSchema, gateSchema } from "./schemaDrive";
 import { conductionSchema, cornerSchema } from "./schemaOperating";
-import { junctionPartIds, POSITION_ID_PATTERN } from "./partIds";
-import { CURRENT_SCHEMA_VERSION, upgradeDesignDocument } from "./schemaUpgrade";
+import { junctionPartIds, POSITION_ID_PATTERN } from "../partIds";
+import { CURRENT_SCHEMA_VERSION, upgradeDesignDocument } from "../schemaUpgrade";
 import {
   DEFAULT_MIN_HEADROOM_ABOVE_PLATEAU_V,
   DEFAULT_TJ_MARGIN_K,
   DEFAULT_VGS_MAX_FRACTION,
-} from "./policy";
+} from "../policy";
 
 export const positionSchema = z
   .object({

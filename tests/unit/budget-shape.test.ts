@@ -1,12 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { parseDesign, type Design } from "@/models/schema";
+import { parseDesign, type Design } from "@/models/input/schema";
 import { evaluateDesign } from "@/models/evaluate";
 import { demoOptions } from "@/models/demo";
 import { LOSS_MECHANISMS } from "@/models/losses";
-import { controllerByCorner, editorHref, elementWords, junctionRows, junctionStatus, lossBarData, NEAR_LIMIT_BAND_K, warningsFor } from "./shape";
-import { driveChainBill } from "./bill";
+import { controllerByCorner, editorHref, elementWords, junctionRows, junctionStatus, lossBarData, NEAR_LIMIT_BAND_K, warningsFor } from "@/components/budget/shape";
+import { driveChainBill } from "@/components/budget/bill";
 import fc from "fast-check";
-import { applyKnobs, applyKnobsToDesign, knobTargets, readKnobs, trialIssues } from "./whatif";
+import { knobEdits, knobTargets, readKnobs, trialIssues, withEdits } from "@/components/budget/trialEdits";
 
 function design(i: number): Design {
   const r = parseDesign(demoOptions[i].input);
@@ -91,7 +91,7 @@ describe("what-if knobs", () => {
 
   it("applies fsw as one factor and the ambient as one shift over every corner", () => {
     const k = readKnobs(d, t);
-    const next = applyKnobs(doc, d, t, { ...k, fsw: k.fsw * 2, ambient: k.ambient - 10 });
+    const next = withEdits(doc, knobEdits(d, t, { ...k, fsw: k.fsw * 2, ambient: k.ambient - 10 }));
     const parsed = parseDesign(next);
     if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
     parsed.design.corners.forEach((c, i) => {
@@ -104,7 +104,7 @@ describe("what-if knobs", () => {
   it("keeps the on/off resistor ratio and leaves the original document untouched", () => {
     const k = readKnobs(d, t);
     const before = JSON.stringify(doc);
-    const next = applyKnobs(doc, d, t, { ...k, rOn: (k.rOn ?? 1) * 2 });
+    const next = withEdits(doc, knobEdits(d, t, { ...k, rOn: (k.rOn ?? 1) * 2 }));
     expect(JSON.stringify(doc)).toBe(before);
     const parsed = parseDesign(next);
     if (!parsed.ok) throw new Error("does not parse");
@@ -115,15 +115,15 @@ describe("what-if knobs", () => {
 
   it("changes the evaluated numbers", () => {
     const k = readKnobs(d, t);
-    const next = parseDesign(applyKnobs(doc, d, t, { ...k, fsw: k.fsw * 1.5 }));
+    const next = parseDesign(withEdits(doc, knobEdits(d, t, { ...k, fsw: k.fsw * 1.5 })));
     if (!next.ok) throw new Error("does not parse");
     expect(evaluateDesign(next.design).corners[0].totalLoss).toBeGreaterThan(evaluateDesign(d).corners[0].totalLoss);
   });
 });
 
 describe("what-if trial without parsing in the browser", () => {
-  // The dashboard evaluates applyKnobsToDesign(parsed design) and checks
-  // trialIssues instead of parsing the raw copy; both must agree with the
+  // The dashboard writes the knobs' edits into the parsed design and checks
+  // trialIssues(edits) instead of parsing the edited document; both must agree with the
   // schema for any knob values, in range or not.
   const factor = fc.oneof(fc.double({ min: 0.2, max: 5, noNaN: true }), fc.constantFrom(0, -1, 1e6, 1e-9));
   const shift = fc.oneof(fc.double({ min: -40, max: 40, noNaN: true }), fc.constantFrom(-500, 300));
@@ -140,10 +140,11 @@ describe("what-if trial without parsing in the browser", () => {
           rOn: k.rOn === null ? null : k.rOn === 0 ? rk : k.rOn * rk,
           driveVoltage: k.driveVoltage === null ? null : k.driveVoltage * vk,
         };
-        const parsed = parseDesign(applyKnobs(demoOptions[i].input, d, t, knobs));
-        const issues = trialIssues(d, t, knobs);
+        const edits = knobEdits(d, t, knobs);
+        const parsed = parseDesign(withEdits(demoOptions[i].input, edits));
+        const issues = trialIssues(edits);
         expect(issues.length === 0).toBe(parsed.ok);
-        if (parsed.ok) expect(applyKnobsToDesign(d, t, knobs)).toEqual(parsed.design);
+        if (parsed.ok) expect(withEdits(d, edits)).toEqual(parsed.design);
         else expect(issues.join(" ")).toContain(parsed.issues[0].path);
       }),
       { numRuns: 150, seed: 20261202 },

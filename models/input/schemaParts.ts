@@ -6,7 +6,7 @@
  */
 import { z } from "zod";
 import { qty } from "./units";
-import { DATASHEET_DEFAULTS as D } from "./policy";
+import { DATASHEET_DEFAULTS as D } from "../policy";
 
 const partNumber = z.string().min(1).max(80);
 

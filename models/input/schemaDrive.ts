@@ -5,7 +5,7 @@
 import { z } from "zod";
 import { qty } from "./units";
 import { bjtSchema, driverIcFields, driverIcSchema } from "./schemaParts";
-import { DATASHEET_DEFAULTS as D } from "./policy";
+import { DATASHEET_DEFAULTS as D } from "../policy";
 
 const partNumber = z.string().min(1).max(80);
 

@@ -4,7 +4,7 @@
  * API. Only the caps differ: each caller states its own.
  */
 import { z } from "zod";
-import { LOSS_MECHANISMS } from "./losses";
+import { LOSS_MECHANISMS } from "../losses";
 
 export function sweepSpecSchema(caps: { maxSteps: number; maxCells: number; per: string }) {
   const axis = z

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { marginSummary, marginWords } from "./MarginBar";
+import { marginSummary, marginWords } from "@/components/ui/MarginBar";
 
 describe("marginSummary", () => {
   it("gives the headroom below the derated limit", () => {

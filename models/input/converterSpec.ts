@@ -5,10 +5,10 @@
  * The calculator re-checks everything itself (validate.ts).
  */
 import { z } from "zod";
-import { qty } from "../units";
+import { qty } from "./units";
 import { FSW_RANGE_HZ } from "../bounds";
-import type { ConverterSpec } from "./types";
-import { TOPOLOGIES } from "./validate";
+import type { ConverterSpec } from "../converter/types";
+import { TOPOLOGIES } from "../converter/validate";
 
 export const converterSpecSchema = z
   .object({

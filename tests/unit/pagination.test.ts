@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { pageWindow } from "./Pagination";
+import { pageWindow } from "@/components/ui/Pagination";
 
 describe("pageWindow", () => {
   it("lists every page when there are few", () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { centreScale, contourPath, polylinePath, rampInterpolator, thinTicks } from "./geometry";
+import { centreScale, contourPath, polylinePath, rampInterpolator, thinTicks } from "@/components/charts/geometry";
 
 describe("centreScale", () => {
   it("interpolates between cell centres, also for uneven axis values", () => {

@@ -15,7 +15,7 @@
  */
 import { z } from "zod";
 import { qty } from "./units";
-import { AMBIENT_RANGE_C, FSW_RANGE_HZ } from "./bounds";
+import { AMBIENT_RANGE_C, FSW_RANGE_HZ } from "../bounds";
 
 export const waveformFields = {
   /** Drain-source voltage just before the turn-on edge. */

@@ -16,7 +16,7 @@
  */
 import { create, unitDependencies, type Unit } from "mathjs";
 import { z } from "zod";
-import { DIMENSIONS, formatQuantity, type Dimension } from "./quantityFormat";
+import { DIMENSIONS, formatQuantity, type Dimension } from "../quantityFormat";
 
 export { DIMENSIONS, formatQuantity, type Dimension };
 
