@@ -18,9 +18,7 @@ const csp = [
 const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
-  // Type errors are caught by the separate `tsc --noEmit` step of npm test,
-  // which covers scripts and tests too.
-  typescript: { ignoreBuildErrors: true },
+  // The build type-checks the app (tsc --noEmit in npm test covers scripts and tests too).
   serverExternalPackages: ["@node-rs/argon2", "knex", "pg", "pg-boss", "pdfkit"],
   experimental: {
     // forbidden() in requirePageMember (app/_lib/access.ts) renders app/forbidden.tsx with a 403.

@@ -9,7 +9,7 @@ import type { Design } from "./input/schema";
 import type { PartKind } from "./partIds";
 import { getAt, setAt, splitPath } from "./documentPath";
 import { buildCornerResult, computeCorner, prepare, type Prepared } from "./evaluate";
-import { CORRELATION_BAND_K, fitThermalResistance, surfaceTemperature, type FitPoint, type Surface, type ThermalFit } from "./fit";
+import { CORRELATION_BAND_K, fitThermalResistance, type FitPoint, type Surface, type ThermalFit } from "./fit";
 
 export interface BenchPart {
   id: string;

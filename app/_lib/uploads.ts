@@ -50,7 +50,9 @@ export async function readCsvUpload(req: Request): Promise<string> {
   const nul = text.indexOf("\u0000");
   if (nul >= 0) {
     const row = text.slice(0, nul).split("\n").length;
-    throw new AppError("bad_request", "The file contains a NUL (U+0000) character; is it really a CSV text file?", [{ path: `row ${row}`, message: "contains a NUL (U+0000) character" }]);
+    throw new AppError("bad_request", "The file contains a NUL (U+0000) character; is it really a CSV text file?", [
+      { path: `row ${row}`, message: "contains a NUL (U+0000) character" },
+    ]);
   }
   return text;
 }

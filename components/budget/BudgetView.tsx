@@ -66,10 +66,16 @@ export function BudgetView(props: BudgetViewProps) {
     evaluator.current ??= loadEvaluator();
   }, []);
 
-  useEffect(() => setKnobs(original), [original]);
+  // New server numbers (a saved revision) put the knobs back on the design's values.
+  const [knobsFor, setKnobsFor] = useState(original);
+  if (knobsFor !== original) {
+    setKnobsFor(original);
+    setKnobs(original);
+  }
 
   useEffect(() => {
     if (!knobsChanged(knobs, original)) {
+      // eslint-disable-next-line react-hooks/set-state-in-effect -- the trial is evaluated asynchronously below; this clears it in the same pass
       setTrial(null);
       setIssues([]);
       return;

@@ -110,6 +110,7 @@ export function ThermalMap({ design }: { design: Design }) {
   }, []);
 
   useEffect(() => {
+    // eslint-disable-next-line react-hooks/set-state-in-effect -- run() starts the sweep worker; its busy flag is set as it starts
     if (near) run();
   }, [run, near]);
 

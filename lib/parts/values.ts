@@ -12,7 +12,7 @@ import { qty } from "@/models/input/units";
 import { bjtSchema, controllerSchema, driverIcSchema, mosfetSchema } from "@/models/input/schemaParts";
 import { PARAM_KEY_ALIASES, PART_KIND_DEFS, PART_KIND_LABELS, TOLERANCE_LABELS, isPartKind, type ParamField, type PartKind, type ToleranceKey } from "./kinds";
 import { parseHfeCurve, parseVoltSecond, snap } from "./paramText";
-import { flattenPaths, getAt, setAt } from "../../models/documentPath";
+import { getAt, setAt } from "../../models/documentPath";
 
 
 export const MPN_MAX = 80;

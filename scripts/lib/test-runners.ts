@@ -36,7 +36,7 @@ function readPlaywright(file: string): Counts | undefined {
  * (--filter is passed to vitest as a file filter and to Playwright as one).
  */
 function parseArgs(argv: string[]): { suites: Set<string>; filter: string[] } {
-  const all = ["typecheck", "unit", "spice", "integration", "browser"];
+  const all = ["typecheck", "lint", "unit", "spice", "integration", "browser"];
   let suites = new Set(all);
   const filter: string[] = [];
   for (let i = 0; i < argv.length; i++) {
@@ -59,6 +59,17 @@ export async function runTestSuites(opts: { env: NodeJS.ProcessEnv; origin: stri
     const code = await runTool(opts.root, path.join(opts.root, "node_modules/.bin/tsc"), ["--noEmit", "-p", "."], env);
     console.log(code === 0 ? "typecheck: no errors" : "typecheck: errors above");
     suites.push({ name: "typecheck", code, counts: { passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0 } });
+  }
+
+  if (wanted.has("lint")) {
+    // ESLint (eslint.config.mjs: Next's rules, typescript-eslint, the house plan's layer rule) and
+    // Prettier in check mode (the files .prettierignore lets through).
+    console.log("\n=== lint (eslint, prettier --check) ===");
+    const eslint = await runTool(opts.root, path.join(opts.root, "node_modules/.bin/eslint"), ["--max-warnings", "0", "."], env);
+    const prettier = await runTool(opts.root, path.join(opts.root, "node_modules/.bin/prettier"), ["--check", "."], env);
+    const code = eslint || prettier;
+    console.log(code === 0 ? "lint: no problems" : "lint: problems above");
+    suites.push({ name: "lint", code, counts: { passed: Number(eslint === 0) + Number(prettier === 0), failed: Number(eslint !== 0) + Number(prettier !== 0), skipped: 0 } });
   }
 
   for (const project of ["unit", "spice", "integration"].filter((p) => wanted.has(p))) {

@@ -13,7 +13,10 @@ import { insertOptionChoice, type OptionChoiceRecord } from "@/db/queries/choice
 const NOT_THIS_PROJECT = () =>
   new AppError("bad_request", "Choose one of this project's options.", [{ path: "optionId", message: "not an option of this project" }]);
 
-export async function chooseOption(member: Member, input: { projectId: string; optionId: string; revision?: number; reason: string }): Promise<OptionChoiceRecord> {
+export async function chooseOption(
+  member: Member,
+  input: { projectId: string; optionId: string; revision?: number; reason: string },
+): Promise<OptionChoiceRecord> {
   const project = await loadInWorkspace(member, (workspaceId) => getProjectById({ workspaceId, projectId: input.projectId }));
   const workspaceId = member.workspace.id;
   const option = await getDesignOptionById({ workspaceId, optionId: input.optionId });
@@ -21,10 +24,17 @@ export async function chooseOption(member: Member, input: { projectId: string; o
   const revision = input.revision ?? option.latestRevision;
   const saved = await insertOptionChoice({ workspaceId, projectId: project.id, optionId: option.id, revision, reason: input.reason, chosenBy: member.user.id });
   if (saved === "option_not_found") throw NOT_THIS_PROJECT();
-  if (saved === "revision_not_found") throw new AppError("bad_request", `Option "${option.name}" has no revision ${revision}.`, [{ path: "revision", message: "no such revision" }]);
+  if (saved === "revision_not_found")
+    throw new AppError("bad_request", `Option "${option.name}" has no revision ${revision}.`, [{ path: "revision", message: "no such revision" }]);
   await mailChosen({
-    workspaceId, projectId: project.id, optionId: option.id, optionName: option.name, revision,
-    actorName: member.user.displayName, actorEmail: member.user.email, reason: input.reason,
+    workspaceId,
+    projectId: project.id,
+    optionId: option.id,
+    optionName: option.name,
+    revision,
+    actorName: member.user.displayName,
+    actorEmail: member.user.email,
+    reason: input.reason,
   });
   return saved;
 }

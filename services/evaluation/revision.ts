@@ -51,7 +51,10 @@ export async function loadRevisionEvaluation({
   revision: number;
   policy?: WorkspaceDerating | null;
 }): Promise<RevisionEvaluation | null> {
-  const [rev, rules] = await Promise.all([getRevisionByNumber({ workspaceId, optionId, revision }), policy === undefined ? getDeratingByWorkspace(workspaceId) : policy]);
+  const [rev, rules] = await Promise.all([
+    getRevisionByNumber({ workspaceId, optionId, revision }),
+    policy === undefined ? getDeratingByWorkspace(workspaceId) : policy,
+  ]);
   if (!rev) return null;
   const values = policyValues(rules);
   const key = `${workspaceId}|${optionId}|${rev.revision}|${JSON.stringify(values)}`;

@@ -14,7 +14,9 @@ import type { JobRecord } from "@/db/queries/jobs";
  * row here, so a bad part or axis is a 400 now rather than a failed job later.
  */
 export async function startJob(member: Member, job: JobCreate): Promise<JobRecord> {
-  const parsed = await loadInWorkspace(member, (workspaceId) => loadRevisionEvaluation({ workspaceId, optionId: job.payload.optionId, revision: job.payload.revision }));
+  const parsed = await loadInWorkspace(member, (workspaceId) =>
+    loadRevisionEvaluation({ workspaceId, optionId: job.payload.optionId, revision: job.payload.revision }),
+  );
   if (!parsed.ok) throw new AppError("bad_request", `Revision ${parsed.revision.revision} does not evaluate; fix it in the editor.`, parsed.issues);
   if (job.kind === "sweep") {
     try {
@@ -24,7 +26,12 @@ export async function startJob(member: Member, job: JobCreate): Promise<JobRecor
       throw e;
     }
   }
-  if (job.kind === "monte-carlo" && job.payload.corner && !["worst", "all"].includes(job.payload.corner) && !parsed.design.corners.some((c) => c.id === job.payload.corner))
+  if (
+    job.kind === "monte-carlo" &&
+    job.payload.corner &&
+    !["worst", "all"].includes(job.payload.corner) &&
+    !parsed.design.corners.some((c) => c.id === job.payload.corner)
+  )
     throw new AppError("bad_request", `No corner "${job.payload.corner}" in this design.`, [{ path: "payload.corner", message: "unknown corner id" }]);
   return enqueueJob({ workspaceId: member.workspace.id, createdBy: member.user.id, job });
 }

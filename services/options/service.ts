@@ -41,7 +41,9 @@ export async function createOption(member: Member, input: CreateOptionInput): Pr
 
 /** A new option whose revision 1 is the source's latest revision. */
 export async function duplicateOption(member: Member, input: { optionId: string; name?: string }): Promise<OptionRecord> {
-  return loadInWorkspace(member, (workspaceId) => duplicateDesignOption({ workspaceId, optionId: input.optionId, name: input.name, createdBy: member.user.id }));
+  return loadInWorkspace(member, (workspaceId) =>
+    duplicateDesignOption({ workspaceId, optionId: input.optionId, name: input.name, createdBy: member.user.id }),
+  );
 }
 
 /** Renames and archiving are logged in the activity. */
@@ -68,10 +70,21 @@ export async function saveRevision(member: Member, input: SaveRevisionInput): Pr
   const unknown = refs.filter(([, id]) => !known.has(id)).map(([path]) => ({ path: `partRefs.${path}`, message: "no such part in this workspace's library" }));
   if (unknown.length) throw new AppError("bad_request", "Check the request body.", unknown);
   const { baseRevision, document, partRefs, note } = input;
-  const saved = await insertRevisionOnBase({ workspaceId: member.workspace.id, optionId: option.id, baseRevision, document, partRefs, note, createdBy: member.user.id });
+  const saved = await insertRevisionOnBase({
+    workspaceId: member.workspace.id,
+    optionId: option.id,
+    baseRevision,
+    document,
+    partRefs,
+    note,
+    createdBy: member.user.id,
+  });
   if (!saved.ok && saved.reason === "not_found") throw new AppError("not_found", "Not found.");
   if (!saved.ok)
-    throw new AppError("conflict", `Revision ${saved.latestRevision} was saved after revision ${baseRevision}, which your edits started from. Nothing was saved.`);
+    throw new AppError(
+      "conflict",
+      `Revision ${saved.latestRevision} was saved after revision ${baseRevision}, which your edits started from. Nothing was saved.`,
+    );
   return { revision: saved.revision, createdAt: saved.createdAt, note };
 }
 

@@ -40,7 +40,12 @@ export async function updatePart(member: Member, input: { partId: string; patch:
     const updated = await updatePartById({ workspaceId, id: current.id, values: r.value }, trx);
     if (updated === "duplicate_mpn") throw duplicate(`Another part is already numbered ${r.value.mpn}.`);
     if (!updated) throw new AppError("not_found", "Not found.");
-    const detail = { partId: current.id, mpn: updated.mpn, manufacturer: updated.manufacturer, ...(updated.mpn !== current.mpn ? { previousMpn: current.mpn } : {}) };
+    const detail = {
+      partId: current.id,
+      mpn: updated.mpn,
+      manufacturer: updated.manufacturer,
+      ...(updated.mpn !== current.mpn ? { previousMpn: current.mpn } : {}),
+    };
     await insertActivity({ workspaceId, projectId: null, actor: member.user.id, action: "part.updated", detail }, trx);
     return updated;
   });
@@ -52,7 +57,16 @@ export async function deletePart(member: Member, input: { partId: string }): Pro
   const objectKey = await getDb().transaction(async (trx) => {
     const gone = await deletePartById({ workspaceId, id: input.partId }, trx);
     if (!gone) throw new AppError("not_found", "Not found.");
-    await insertActivity({ workspaceId, projectId: null, actor: member.user.id, action: "part.deleted", detail: { partId: input.partId, mpn: gone.mpn, manufacturer: gone.manufacturer } }, trx);
+    await insertActivity(
+      {
+        workspaceId,
+        projectId: null,
+        actor: member.user.id,
+        action: "part.deleted",
+        detail: { partId: input.partId, mpn: gone.mpn, manufacturer: gone.manufacturer },
+      },
+      trx,
+    );
     return gone.datasheetFileId ? deleteStoredFileById({ workspaceId, id: gone.datasheetFileId }, trx) : null;
   });
   if (objectKey) await removeObjectQuietly(objectKey);
@@ -65,5 +79,12 @@ export type ReadUpload<T = object> = () => Promise<T & { filename: string | null
 export async function attachDatasheet(member: Member, input: { partId: string; upload: ReadUpload }): Promise<StoredFileRecord> {
   const part = await loadInWorkspace(member, (workspaceId) => getPartById({ workspaceId, id: input.partId }));
   const { filename, bytes } = await input.upload();
-  return replacePartDatasheet({ workspaceId: member.workspace.id, partId: part.id, userId: member.user.id, filename, bytes, previousFileId: part.datasheet?.id ?? null });
+  return replacePartDatasheet({
+    workspaceId: member.workspace.id,
+    partId: part.id,
+    userId: member.user.id,
+    filename,
+    bytes,
+    previousFileId: part.datasheet?.id ?? null,
+  });
 }

@@ -58,7 +58,7 @@ function ramp(t: number): string {
 /** Coloured cells of a sweep with its limit contour and the design point. */
 export function heatmap(doc: Doc, s: SweepResult, y: number, title: string): number {
   const size = Math.min(CONTENT_WIDTH - 90, 330);
-  let at = heading(doc, title, y, 13, size + 70);
+  const at = heading(doc, title, y, 13, size + 70);
   const x0 = M + 50, y0 = at, nx = s.x.values.length, ny = s.y.values.length;
   const cw = size / nx, ch = size / ny;
   const vals = s.z.flat().filter((v): v is number => v !== null);

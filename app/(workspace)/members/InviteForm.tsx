@@ -1,5 +1,5 @@
 "use client";
-import { useActionState, useEffect, useState } from "react";
+import { useActionState, useState } from "react";
 import { IDLE } from "@/lib/action-state";
 import { ROLES, type Role } from "@/lib/roles";
 import { Select, TextInput } from "@/components/ui/Field";
@@ -15,9 +15,12 @@ export function InviteForm() {
   const [email, setEmail] = useState("");
   const [role, setRole] = useState<Role>("designer");
   const errors = state.ok ? {} : state.fieldErrors;
-  useEffect(() => {
+  // A sent invitation clears the address (adjusted while rendering, when the action's state changes).
+  const [seen, setSeen] = useState(state);
+  if (seen !== state) {
+    setSeen(state);
     if (state.ok && state.message) setEmail("");
-  }, [state]);
+  }
   return (
     <form
       action={formAction}

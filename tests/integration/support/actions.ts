@@ -29,12 +29,20 @@ export function actionId(key: string): string {
 }
 
 export type ActionReply =
-  | { kind: "done"; status: number; state?: Record<string, unknown>; redirect?: string }
-  | { kind: "refused"; status: number; code: string; message: string };
+  { kind: "done"; status: number; state?: Record<string, unknown>; redirect?: string } | { kind: "refused"; status: number; code: string; message: string };
 
 const CODE_STATUS: Record<string, number> = {
-  bad_request: 400, unauthenticated: 401, forbidden: 403, not_found: 404, conflict: 409, payload_too_large: 413,
-  unsupported_media_type: 415, unprocessable: 422, too_many_requests: 429, unavailable: 503, internal: 500,
+  bad_request: 400,
+  unauthenticated: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  payload_too_large: 413,
+  unsupported_media_type: 415,
+  unprocessable: 422,
+  too_many_requests: 429,
+  unavailable: 503,
+  internal: 500,
 };
 
 /** The action's returned state, read from the RSC stream of the answer (a line "<id>:<json>" holding { ok, … }). */

@@ -17,6 +17,7 @@ function state(t: ApiTokenRecord, now: number): { label: string; tone: "ok" | "o
 export default async function TokensPage() {
   const member = await requirePageMember("token:own");
   const tokens = await listApiTokensByUser({ userId: member.user.id, workspaceId: member.workspace.id });
+  // eslint-disable-next-line react-hooks/purity -- a server component renders once per request: "now" is the request's time
   const now = Date.now();
   return (
     <>

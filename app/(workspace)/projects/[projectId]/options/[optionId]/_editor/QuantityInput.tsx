@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useState } from "react";
+import { useState } from "react";
 import { TextInput } from "@/components/ui";
 import { DIMENSIONS, formatQuantity, parseQuantity, type Dimension } from "@/models/input/units";
 
@@ -44,9 +44,12 @@ export function QuantityInput({
   const [text, setText] = useState(shown);
   const [refused, setRefused] = useState<string | null>(null);
   const [focused, setFocused] = useState(false);
-  useEffect(() => {
+  // Outside editing, the field follows the document (a revision loaded, an undo, its own commit).
+  const [synced, setSynced] = useState({ shown, focused });
+  if (synced.shown !== shown || synced.focused !== focused) {
+    setSynced({ shown, focused });
     if (!focused) setText(shown);
-  }, [shown, focused]);
+  }
 
   function commit() {
     setFocused(false);
