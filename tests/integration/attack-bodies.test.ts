@@ -78,8 +78,13 @@ describe("uploads", () => {
 
 describe("page paths (server actions and the plain-form routes)", () => {
   it("a form post to a page with a length over the limit is refused at once (413)", async () => {
-    const r = await streamChunked("/sign-in", { totalBytes: TOTAL, contentType: multipart, prefix: fieldPart("email"), headers: { "content-length": String(TOTAL) } });
+    // Only the first part is written; the 413 must come from the declared
+    // length alone, before the rest of the body (socket buffering cannot blur it).
+    const r = await streamChunked("/sign-in", {
+      totalBytes: TOTAL, contentType: multipart, prefix: fieldPart("email"), headers: { "content-length": String(TOTAL) }, holdAfterPrefix: true,
+    });
     expectRefusedEarly(r, MB);
+    expect(r.sentBytes).toBe(Buffer.byteLength(fieldPart("email")));
   });
 
   it("a chunked form post to a page, or to a plain-form route, is refused at once (411: the length is required)", async () => {

@@ -46,11 +46,16 @@ export interface StreamResult {
  * POSTs `totalBytes` of `fill` (after an optional `prefix`) in `chunkBytes`
  * pieces, with Transfer-Encoding: chunked and no Content-Length unless
  * headers gives one, waiting for each piece to drain; stops writing as soon
- * as the response starts.
+ * as the response starts. With `holdAfterPrefix` it writes only the prefix
+ * and then waits (up to 10 s) for an answer: a server that decides from the
+ * headers answers without the rest of the body, whatever the sockets buffer.
  */
 export function streamChunked(
   path: string,
-  opts: { totalBytes: number; contentType: string; prefix?: string; fill?: number; chunkBytes?: number; cookie?: string; headers?: Record<string, string> },
+  opts: {
+    totalBytes: number; contentType: string; prefix?: string; fill?: number; chunkBytes?: number; cookie?: string;
+    headers?: Record<string, string>; holdAfterPrefix?: boolean;
+  },
 ): Promise<StreamResult> {
   const url = new URL(path, ORIGIN);
   const chunk = Buffer.alloc(opts.chunkBytes ?? 64 * 1024, opts.fill ?? 0x61);
@@ -87,6 +92,16 @@ export function streamChunked(
       if (opts.prefix) {
         req.write(opts.prefix);
         sent += Buffer.byteLength(opts.prefix);
+      }
+      if (opts.holdAfterPrefix) {
+        const timer = setTimeout(() => {
+          if (!answered) {
+            req.destroy();
+            reject(new Error(`no answer within 10 s after ${sent} bytes of a declared ${opts.totalBytes}`));
+          }
+        }, 10_000);
+        req.once("response", () => clearTimeout(timer));
+        return;
       }
       while (!answered && sent < opts.totalBytes) {
         const ok = req.write(chunk);
