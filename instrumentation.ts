@@ -6,7 +6,7 @@ export async function register(): Promise<void> {
     installPeerAddressHeader();
     const { installPageBodyGuard } = await import("./app/_lib/page-body-guard");
     installPageBodyGuard();
-    // Every app instance works the job queue (pg-boss, app/_lib/jobs.ts).
+    // Every app instance works the job queue (pg-boss, services/jobs/queue.ts).
     // Not awaited: a database that is not up yet must not stop the server;
     // the workers start on the first success. JOB_WORKERS=off disables them.
     if (process.env.JOB_WORKERS !== "off") {

@@ -13,7 +13,7 @@ import { SESSION_COOKIE } from "@/lib/session-cookie";
 // It never sets the session cookie: it cannot tell a valid session from an
 // invalid one (no database here), and re-sending whatever came in would give
 // a dead or stolen id a fresh lifetime. The cookie is set at sign-in with the
-// session's absolute lifetime (app/_lib/auth.ts).
+// session's absolute lifetime (services/auth/session.ts).
 export function proxy(req: NextRequest): NextResponse {
   const { pathname, searchParams } = req.nextUrl;
   for (const [key, value] of searchParams) {

@@ -5,7 +5,7 @@
 // or carriage return, the OWASP "CSV Injection" list) gets a leading
 // apostrophe, which spreadsheets show as text. Numbers are written as
 // numbers: a negative figure is data, not a formula. Our own readers strip
-// the apostrophe again (app/_lib/partCsv.ts).
+// the apostrophe again (lib/parts/csv.ts).
 
 export type CsvCell = string | number | null | undefined;
 

@@ -18,7 +18,7 @@ export const PERMISSIONS = {
   // Background jobs (sweeps, Monte Carlo, reports) cost server time: every role that writes something may start one, a viewer may not.
   "job:start": ["admin", "designer", "reviewer", "manager"],
   "token:own": ["admin", "designer", "reviewer", "manager", "viewer"],
-  // Each member sees only their own mail there (app/_lib/accounts/dev-inbox.ts).
+  // Each member sees only their own mail there (services/mail/dev-inbox.ts).
   "dev:inbox": ["admin", "designer", "reviewer", "manager", "viewer"],
 } as const satisfies Record<string, readonly Role[]>;
 export type Permission = keyof typeof PERMISSIONS;

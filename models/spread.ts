@@ -25,7 +25,8 @@ import { buildParts } from "./registry";
 import { createRng } from "./rng";
 import type { PartKind } from "./partIds";
 
-export type ToleranceKey = "qg" | "rdsOn" | "vpl" | "hfe" | "vbe" | "iq" | "resistance" | "rth";
+import type { ToleranceKey } from "./tolerance";
+export type { ToleranceKey };
 export type ToleranceTable = Record<ToleranceKey, number>;
 
 /**

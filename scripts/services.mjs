@@ -26,7 +26,7 @@ const smtp = new SMTPServer({
     simpleParser(stream)
       .then(async (mail) => {
         const to = session.envelope.rcptTo.map((r) => r.address.toLowerCase());
-        // who caused it (app/_lib/mail.ts sets the header only for this catcher), for the development inbox
+        // who caused it (services/mail/mail.ts sets the header only for this catcher), for the development inbox
         const cause = mail.headers.get("x-heatsplit-caused-by");
         await pool.query(
           "insert into dev_mailbox (recipients, sender, subject, text_body, html_body, caused_by) values ($1, $2, $3, $4, $5, $6)",

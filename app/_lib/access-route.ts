@@ -116,7 +116,7 @@ function hasAuthorization(req: NextRequest): boolean {
 async function authenticate(req: NextRequest): Promise<{ member: Member | null; signedIn: boolean }> {
   const authorization = req.headers.get("authorization");
   if (authorization) {
-    // API tokens (app/_lib/api-tokens.ts): a Member with via "token" and the
+    // API tokens (services/tokens/service.ts): a Member with via "token" and the
     // user's current role; the session cookie is ignored for such a request.
     // Unknown, revoked or expired -> 401.
     const member = await resolveBearer(authorization);

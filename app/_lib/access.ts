@@ -28,7 +28,7 @@ export { loadInWorkspace } from "@/services/records";
 
 /** The signed-in user, their workspaces and current membership; cached per render. */
 // Pages cannot set cookies; none needs to: the cookie lives the session's
-// absolute lifetime and the database keeps the idle expiry (app/_lib/auth.ts).
+// absolute lifetime and the database keeps the idle expiry (services/auth/session.ts).
 export const getSignedInContext = cache(async (): Promise<SignedInContext | null> => {
   return resolveSession((await cookies()).get(SESSION_COOKIE)?.value);
 });

@@ -1,8 +1,8 @@
 import "server-only";
-import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import type { Role } from "@/lib/roles";
+import { newRecordId } from "@/db/ids";
 
 // Personal API tokens. Only the SHA-256 of the secret is stored; listings
 // never carry it. A token acts for its user in its workspace with the role
@@ -37,7 +37,7 @@ export async function insertApiToken(
   { userId, workspaceId, name, tokenHash, expiresAt }: { userId: string; workspaceId: string; name: string; tokenHash: string; expiresAt: Date },
   db: Knex = getDb(),
 ): Promise<ApiTokenRecord> {
-  const id = `tok_${crypto.randomBytes(10).toString("base64url")}`;
+  const id = newRecordId("tok");
   const [row] = await db("api_token").insert({ id, user_id: userId, workspace_id: workspaceId, name, token_hash: tokenHash, expires_at: expiresAt }).returning<TokenRow[]>(PUBLIC_COLUMNS);
   return toRecord(row);
 }

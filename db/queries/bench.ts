@@ -1,8 +1,8 @@
 import "server-only";
-import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import type { BenchReadingInput } from "@/models/fitDesign";
+import { newRecordId } from "@/db/ids";
 
 // bench_run rows (one uploaded CSV against one option revision) and their
 // bench_reading rows. Every lookup takes the workspace id, so another
@@ -50,7 +50,7 @@ function toRun(r: RunRow): BenchRunRecord {
 }
 
 export function newBenchRunId(): string {
-  return `bnr_${crypto.randomBytes(10).toString("base64url")}`;
+  return newRecordId("bnr");
 }
 
 /** The run and all its readings in one statement batch (call inside the upload's transaction). */

@@ -1,8 +1,8 @@
 import "server-only";
-import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import { insertActivity } from "./activity";
+import { newTimeOrderedId } from "@/db/ids";
 
 // The manager's recorded choice of design option per project. Append-only:
 // a new choice is a new row and the latest one wins, so the sign-off history
@@ -103,7 +103,7 @@ export async function insertOptionChoice(
     if (!option) return "option_not_found";
     const rev = await trx("option_revision").where({ option_id: input.optionId, revision: input.revision }).first<{ revision: number } | undefined>("revision");
     if (!rev) return "revision_not_found";
-    const id = `chc_${Date.now().toString(36).padStart(9, "0")}${crypto.randomBytes(6).toString("base64url")}`;
+    const id = newTimeOrderedId("chc");
     await trx("option_choice").insert({
       id,
       workspace_id: input.workspaceId,

@@ -2,6 +2,7 @@ import "server-only";
 import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
+import { newRecordId } from "@/db/ids";
 
 // stored_file rows: the metadata of an object in the bucket. Every lookup
 // takes the workspace id, so another workspace's file is simply not found.
@@ -49,7 +50,7 @@ function toRecord(r: FileRow): StoredFileRecord {
 }
 
 export function newFileId(): string {
-  return `fil_${crypto.randomBytes(10).toString("base64url")}`;
+  return newRecordId("fil");
 }
 
 /** A fresh, unguessable object key under the workspace's prefix: a replaced file never overwrites the old object. */

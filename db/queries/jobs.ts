@@ -1,8 +1,8 @@
 import "server-only";
-import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import type { JobKind, JobStatus } from "@/lib/jobs/schema";
+import { newRecordId } from "@/db/ids";
 
 // job_result rows: the app's record of a background job (who asked, state,
 // progress, checkpoint, result). Reads for users take the workspace id; the
@@ -57,7 +57,7 @@ function toJob(r: JobRow): JobRecord {
 }
 
 export function newJobId(): string {
-  return `job_${crypto.randomBytes(10).toString("base64url")}`;
+  return newRecordId("job");
 }
 
 export async function insertJobResult(

@@ -1,7 +1,7 @@
 import "server-only";
-import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
+import { newRecordId } from "@/db/ids";
 
 // design_option rows and their numbered option_revision documents. Every
 // function takes the workspace id, so another workspace's option is simply
@@ -86,7 +86,7 @@ function toSummary(r: RevisionRow): RevisionSummary {
 }
 
 export function newOptionId(): string {
-  return `opt_${randomUUID().replace(/-/g, "").slice(0, 20)}`;
+  return newRecordId("opt");
 }
 
 export interface NewOption {

@@ -1,10 +1,10 @@
 import "server-only";
-import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import type { PartKind } from "@/lib/parts/kinds";
 import type { PartValues } from "@/lib/parts/values";
 import type { PartListFilter } from "@/lib/parts/schema";
+import { newRecordId } from "@/db/ids";
 
 // The parts library. Every function takes the workspace id, so another
 // workspace's part is simply not found (callers answer 404).
@@ -45,7 +45,7 @@ interface PartRow {
 }
 
 export function newPartId(): string {
-  return `prt_${crypto.randomBytes(10).toString("base64url")}`;
+  return newRecordId("prt");
 }
 
 function toRecord(r: PartRow): PartRecord {

@@ -1,9 +1,9 @@
 import "server-only";
-import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import type { ProjectListQuery, ProjectPatch, ProjectStatus, ProjectValues, Topology } from "@/lib/projects/schema";
 import { defaultDirection } from "@/lib/projects/schema";
+import { newRecordId } from "@/db/ids";
 
 // project rows. Every function takes the workspace id, so a project of
 // another workspace is simply not found (callers answer 404).
@@ -102,7 +102,7 @@ function toRow(values: ProjectPatch): Record<string, unknown> {
 }
 
 export function newProjectId(): string {
-  return `prj_${randomUUID().replace(/-/g, "").slice(0, 20)}`;
+  return newRecordId("prj");
 }
 
 export async function insertProject(

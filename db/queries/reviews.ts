@@ -1,8 +1,8 @@
 import "server-only";
-import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { getDb } from "@/db/knex";
 import { insertActivity } from "./activity";
+import { newTimeOrderedId } from "@/db/ids";
 
 // Reviews of option revisions and the reviewer's comments. One review per
 // (option, revision): submitting freezes the revision in the same
@@ -48,7 +48,6 @@ interface ReviewRow {
   decided_at: Date | null;
 }
 
-const newId = (prefix: string) => `${prefix}_${Date.now().toString(36)}${crypto.randomBytes(6).toString("base64url")}`;
 
 function reviewQuery(db: Knex, workspaceId: string) {
   return db("option_review as r")
@@ -113,7 +112,7 @@ export async function insertReviewSubmission(
     if (!rev) return { ok: false, reason: "revision_not_found" };
     const existing = await trx("option_review").where({ option_id: optionId, revision }).first("id");
     if (existing) return { ok: false, reason: "already_submitted" };
-    const id = newId("rvw");
+    const id = newTimeOrderedId("rvw");
     await trx("option_revision").where({ option_id: optionId, revision }).update({ frozen: true });
     await trx("option_review").insert({ id, workspace_id: workspaceId, project_id: rev.project_id, option_id: optionId, revision, status: "submitted", submitted_by: submittedBy });
     await insertActivity({ workspaceId, projectId: rev.project_id, optionId, revision, actor: submittedBy, action: "review.submitted", detail: note ? { note } : {} }, trx);
@@ -141,7 +140,7 @@ export async function updateReviewDecisionById(
     await trx("option_review").where({ id: reviewId }).update({ status, decided_by: decidedBy, decided_at: trx.fn.now() });
     if (comments.length) {
       await trx("review_comment").insert(comments.map((c) => ({
-        id: newId("rvc"), review_id: reviewId, option_id: review.option_id, revision: review.revision, author_id: decidedBy,
+        id: newTimeOrderedId("rvc"), review_id: reviewId, option_id: review.option_id, revision: review.revision, author_id: decidedBy,
         body: c.body, target_part: c.targetPart ?? null, target_figure: c.targetFigure ?? null,
       })));
     }

@@ -7,12 +7,12 @@
 //
 // Idempotent: a part is inserted only when its (workspace, mpn) is missing,
 // so a second run adds nothing and a user's edits are never overwritten.
-import crypto from "node:crypto";
 import type { Knex } from "knex";
 import { demoParts, type DemoPart } from "../../models/demoParts";
 import { validatePartDraft, type PartDraft, type PartValues } from "../../lib/parts/values";
 import { flattenPaths } from "../../models/documentPath";
 import type { PartKind } from "../../lib/parts/kinds";
+import { newRecordId } from "../ids";
 
 const MAKER_BY_PREFIX: [RegExp, string][] = [
   [/^HRG-/, "Harrowgate Silicon (demo)"],
@@ -86,7 +86,7 @@ export function demoPartValues(): PartValues[] {
 
 export async function seedDemoParts(trx: Knex | Knex.Transaction, workspaceId: string): Promise<number> {
   const rows = demoPartValues().map((v) => ({
-    id: `prt_${crypto.randomBytes(10).toString("base64url")}`,
+    id: newRecordId("prt"),
     workspace_id: workspaceId,
     kind: v.kind,
     manufacturer: v.manufacturer,

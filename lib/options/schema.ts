@@ -1,7 +1,7 @@
 /**
  * Design options and their revisions: the schemas the editor, the project
  * page's forms and /api/v1 handlers share. The design document itself is
- * the model's (models/schema.ts): it is stored as the user typed it (unit
+ * the model's (models/input/schema.ts): it is stored as the user typed it (unit
  * strings kept) and accepted only when parseDesign accepts it; its issues
  * come back under "document.<path>" so the editor can place them. An older
  * version (models/schemaUpgrade.ts) is accepted and stored upgraded, so the

@@ -4,11 +4,12 @@
  * the server all read these definitions, so a parameter is named once.
  *
  * `key` is the dotted path inside the stored params object, which is shaped
- * like the model's datasheet block (models/schemaParts.ts) so a design option
+ * like the model's datasheet block (models/input/schemaParts.ts) so a design option
  * can copy it. `model: false` marks library-only figures the model does not
  * read (polarity, ratings); partToModelBlock() leaves them out.
  */
 import type { Dimension, QtyOptions } from "@/models/input/units";
+import { TOLERANCE_KEYS, type ToleranceKey } from "../../models/tolerance";
 
 export const PART_KINDS = ["controller", "mosfet", "bjt", "driver-ic", "diode", "zener", "gate-transformer"] as const;
 export type PartKind = (typeof PART_KINDS)[number];
@@ -25,7 +26,7 @@ export const PART_KIND_LABELS: Record<PartKind, string> = {
 
 export type ParamType =
   | { type: "qty"; dim: Dimension; opts?: QtyOptions }
-  /** Volt-seconds ("25 V·µs"): no dimension of models/units.ts, parsed in partValues.ts. */
+  /** Volt-seconds ("25 V·µs"): no dimension of models/input/units.ts, parsed in partValues.ts. */
   | { type: "voltSecond" }
   /** hFE(Ic) points written "0.1 A: 220; 1 A: 150". */
   | { type: "hfeCurve" }
@@ -41,8 +42,8 @@ export type ParamField = ParamType & {
   hint?: string;
 };
 
-/** Tolerance keys of models/schemaParts.ts toleranceSchema (relative spread, 0.1 = ±10 %). */
-export const TOLERANCE_LABELS = {
+/** Labels of the tolerance keys (models/tolerance.ts: relative spread, 0.1 = ±10 %). */
+export const TOLERANCE_LABELS: Record<ToleranceKey, string> = {
   qg: "Qg spread",
   rdsOn: "Rds(on) spread",
   vpl: "Vpl spread",
@@ -51,8 +52,8 @@ export const TOLERANCE_LABELS = {
   iq: "Iq spread",
   resistance: "Resistance spread",
   rth: "Rθ spread",
-} as const;
-export type ToleranceKey = keyof typeof TOLERANCE_LABELS;
+};
+export type { ToleranceKey };
 
 const q = (key: string, label: string, dim: Dimension, required: boolean, extra: Partial<ParamField> & { opts?: QtyOptions } = {}): ParamField =>
   ({ key, label, required, type: "qty", dim, ...extra }) as ParamField;
@@ -202,5 +203,5 @@ export function allParamKeys(): string[] {
 }
 
 export function allToleranceKeys(): ToleranceKey[] {
-  return Object.keys(TOLERANCE_LABELS) as ToleranceKey[];
+  return [...TOLERANCE_KEYS];
 }

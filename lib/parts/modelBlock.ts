@@ -2,8 +2,8 @@
  * A library part as the model's datasheet block, for design options that
  * copy a part: the stored SI params minus library-only figures (polarity,
  * ratings), plus the part number, the unit cost and the tolerances. The
- * result parses with the matching schema of models/schemaParts.ts (or the
- * transformer / clamp fields of models/schemaDrive.ts), which fills in its
+ * result parses with the matching schema of models/input/schemaParts.ts (or the
+ * transformer / clamp fields of models/input/schemaDrive.ts), which fills in its
  * own defaults.
  */
 import { PART_KIND_DEFS, type PartKind } from "./kinds";

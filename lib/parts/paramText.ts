@@ -1,13 +1,10 @@
 /**
- * Text forms of part parameters that models/units.ts does not cover: the
+ * Text forms of part parameters that models/input/units.ts does not cover: the
  * hFE(Ic) curve in one cell, volt-seconds, and an exact ASCII writing of SI
  * numbers for the CSV export (formatQuantity rounds to 3 digits for display;
  * an export must read back to the same number).
  */
-import { create, unitDependencies } from "mathjs";
-import { formatQuantity, parseQuantity, QuantityError, type Dimension } from "@/models/input/units";
-
-const { unit } = create({ unitDependencies });
+import { formatQuantity, parseQuantity, parseUnit as unit, QuantityError, type Dimension } from "@/models/input/units";
 
 /** Stored numbers keep 12 significant digits: unit conversion fuzz (4.7000000000000004e-8) never reaches the database. */
 export const STORED_SIGNIFICANT_DIGITS = 12;

@@ -1,6 +1,6 @@
 /**
  * The part record as the form, /api/v1/parts and the CSV import read it, and
- * the library's list filter. One validation (app/_lib/partValues.ts) behind
+ * the library's list filter. One validation (lib/parts/values.ts) behind
  * every schema, so the browser shows the field errors the server would return.
  */
 import { z } from "zod";

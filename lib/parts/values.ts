@@ -3,7 +3,7 @@
  * CSV row): a draft with raw values (unit strings or SI numbers) in, the
  * stored record (SI numbers, 12 significant digits) or a list of problems
  * out. Datasheet blocks the model knows are checked by the model's own
- * schema (models/schemaParts.ts), so a stored part always parses as one.
+ * schema (models/input/schemaParts.ts), so a stored part always parses as one.
  * Only the figures the user gave are stored: defaults (Rg(int) 1 Ω, ...) are
  * the model's to fill in, never shown as if read from a datasheet.
  */

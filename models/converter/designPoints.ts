@@ -1,6 +1,6 @@
 /**
  * From the calculator's output at a list of corners to the design
- * document's waveform points (the scheme in models/schemaOperating.ts):
+ * document's waveform points (the scheme in models/input/schemaOperating.ts):
  * full-load points in rising Vin for each position, plus, for every other
  * corner, an override with that corner's own values (the document would
  * otherwise scale the full-load currents linearly with load, which a DCM

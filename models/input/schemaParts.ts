@@ -6,6 +6,7 @@
  */
 import { z } from "zod";
 import { qty } from "./units";
+import { TOLERANCE_KEYS, type ToleranceKey } from "../tolerance";
 import { DATASHEET_DEFAULTS as D } from "../policy";
 
 const partNumber = z.string().min(1).max(80);
@@ -15,16 +16,7 @@ const partNumber = z.string().min(1).max(80);
  * nominal evaluation ignores it.
  */
 export const toleranceSchema = z
-  .object({
-    qg: qty("ratio", { min: 0, max: 1 }),
-    rdsOn: qty("ratio", { min: 0, max: 1 }),
-    vpl: qty("ratio", { min: 0, max: 1 }),
-    hfe: qty("ratio", { min: 0, max: 1 }),
-    vbe: qty("ratio", { min: 0, max: 1 }),
-    iq: qty("ratio", { min: 0, max: 1 }),
-    resistance: qty("ratio", { min: 0, max: 1 }),
-    rth: qty("ratio", { min: 0, max: 1 }),
-  })
+  .object(Object.fromEntries(TOLERANCE_KEYS.map((k) => [k, qty("ratio", { min: 0, max: 1 })])) as Record<ToleranceKey, ReturnType<typeof qty>>)
   .partial()
   .strict();
 

@@ -22,6 +22,8 @@ export { DIMENSIONS, formatQuantity, type Dimension };
 
 const math = create({ unitDependencies });
 const unit = (text: string): Unit => math.unit(text) as Unit;
+/** The one mathjs unit parser of the app (the units part of mathjs only), for text forms units.ts does not cover (lib/parts/paramText.ts). */
+export { unit as parseUnit };
 
 export class QuantityError extends Error {}
 

@@ -10,7 +10,7 @@ import path from "node:path";
 import knexFactory from "knex";
 import { ORIGIN, api, signUp, type Account } from "../load/common";
 
-const IMPORT_ROWS = 5_000; // the most one import takes (MAX_IMPORT_ROWS in app/_lib/partCsv.ts), about 0.6 MB
+const IMPORT_ROWS = 5_000; // the most one import takes (MAX_IMPORT_ROWS in lib/parts/csv.ts), about 0.6 MB
 const PDF_BYTES = 6 * 1024 * 1024; // under the 10 MB datasheet limit
 
 function bigCsv(prefix: string): string {

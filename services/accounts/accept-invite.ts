@@ -1,18 +1,19 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/roles";
-import { createSignedInSession } from "../auth/session";
-import { hashPassword } from "../auth/passwords";
+import { createSignedInSession } from "@/services/auth/session";
+import { hashPassword } from "@/services/auth/passwords";
 import { PASSWORD_MIN_LENGTH } from "@/lib/password-policy";
-import { newId } from "../auth/secrets";
+
 import { getDb } from "@/db/knex";
 import { getUserByEmail, insertUser } from "@/db/queries/accounts";
 import { markInviteAcceptedById } from "@/db/queries/invites";
 import { insertMembership } from "@/db/queries/workspaces";
 import { getMemberByUser } from "@/db/queries/members";
-import { BAD_INVITE, loadOpenInvite } from "../members/invites";
+import { BAD_INVITE, loadOpenInvite } from "@/services/members/invites";
 import { checkPassword, endCurrentSession } from "./sign-in";
 import type { AcceptInviteInput } from "@/lib/accounts/schema";
+import { newRecordId } from "@/db/ids";
 
 export interface AcceptedInvite {
   workspace: { id: string; name: string };
@@ -46,7 +47,7 @@ export async function acceptInvite(
     if (!input.password || input.password.length < PASSWORD_MIN_LENGTH) {
       throw fieldError("password", `Use at least ${PASSWORD_MIN_LENGTH} characters.`);
     }
-    newUser = { id: newId("usr"), displayName: input.displayName, passwordHash: await hashPassword(input.password) };
+    newUser = { id: newRecordId("usr"), displayName: input.displayName, passwordHash: await hashPassword(input.password) };
     userId = newUser.id;
   }
   await getDb().transaction(async (trx) => {

@@ -1,11 +1,11 @@
 import "server-only";
 import { after } from "next/server";
 import { AppError } from "@/lib/errors";
-import { getLucia } from "../auth/session";
-import { hashPassword } from "../auth/passwords";
-import { createToken, hashToken } from "../auth/secrets";
-import { appLink, sendMail } from "../mail/mail";
-import { clearPasswordAttempts, takeMailAllowance } from "../auth/throttle";
+import { getLucia } from "@/services/auth/session";
+import { hashPassword } from "@/services/auth/passwords";
+import { createToken, hashToken } from "@/services/auth/secrets";
+import { appLink, sendMail } from "@/services/mail/mail";
+import { clearPasswordAttempts, takeMailAllowance } from "@/services/auth/throttle";
 import { getDb } from "@/db/knex";
 import { getUserByEmail, getUserById, updateUserPasswordById } from "@/db/queries/accounts";
 import { consumePasswordResetByTokenHash, expirePasswordResetsByUser, insertPasswordReset } from "@/db/queries/password-resets";

@@ -1,9 +1,9 @@
 import "server-only";
 import { cookies } from "next/headers";
 import { AppError } from "@/lib/errors";
-import { getLucia, SESSION_COOKIE, createSignedInSession, clearSessionCookie } from "../auth/session";
-import { verifyPassword } from "../auth/passwords";
-import { beginPasswordAttempt } from "../auth/throttle";
+import { getLucia, SESSION_COOKIE, createSignedInSession, clearSessionCookie } from "@/services/auth/session";
+import { verifyPassword } from "@/services/auth/passwords";
+import { beginPasswordAttempt } from "@/services/auth/throttle";
 import { getCredentialsByEmail, type UserRecord } from "@/db/queries/accounts";
 import { listMembershipsByUser } from "@/db/queries/workspaces";
 

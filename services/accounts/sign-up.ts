@@ -1,17 +1,18 @@
 import "server-only";
 import { after } from "next/server";
 import { AppError } from "@/lib/errors";
-import { createSignedInSession } from "../auth/session";
-import { hashPassword } from "../auth/passwords";
-import { createToken, hashToken, newId } from "../auth/secrets";
-import { appLink, sendMail } from "../mail/mail";
-import { claimSignUp, takeMailAllowance } from "../auth/throttle";
+import { createSignedInSession } from "@/services/auth/session";
+import { hashPassword } from "@/services/auth/passwords";
+import { createToken, hashToken } from "@/services/auth/secrets";
+import { appLink, sendMail } from "@/services/mail/mail";
+import { claimSignUp, takeMailAllowance } from "@/services/auth/throttle";
 import { getDb } from "@/db/knex";
 import { getUserByEmail, insertUser, type UserRecord } from "@/db/queries/accounts";
 import { insertMembership, insertWorkspace, type WorkspaceRecord } from "@/db/queries/workspaces";
 import { consumePendingSignUpByTokenHash, deletePendingSignUpsByEmail, insertPendingSignUp } from "@/db/queries/pending-sign-ups";
 import { endCurrentSession } from "./sign-in";
 import type { SignUpInput } from "@/lib/accounts/schema";
+import { newRecordId } from "@/db/ids";
 
 // Sign-up in two steps, so its answer cannot tell whether an address has an
 // account: the request always answers SIGN_UP_REQUESTED_MESSAGE at once (only
@@ -56,7 +57,7 @@ async function mailSignUp(input: SignUpInput, causedBy: string | null): Promise<
 
 /** The mailed link: creates the account and its workspace (the creator is admin) and signs in. */
 export async function confirmSignUp(token: string): Promise<{ user: UserRecord; workspace: WorkspaceRecord }> {
-  const ids = { user: newId("usr"), workspace: newId("ws") };
+  const ids = { user: newRecordId("usr"), workspace: newRecordId("ws") };
   const created = await getDb()
     .transaction(async (trx) => {
       const pending = await consumePendingSignUpByTokenHash(hashToken(token), trx);

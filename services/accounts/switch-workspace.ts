@@ -1,7 +1,7 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
-import type { Member } from "../auth/member";
-import { requireSessionMember } from "../tokens/service";
+import type { Member } from "@/services/auth/member";
+import { requireSessionMember } from "@/services/tokens/service";
 import { listMembershipsByUser, type MembershipRecord } from "@/db/queries/workspaces";
 import { updateSessionWorkspaceById } from "@/db/queries/sessions";
 

@@ -14,7 +14,3 @@ export function createToken(): { token: string; tokenHash: string } {
   return { token, tokenHash: hashToken(token) };
 }
 
-/** Record ids: a readable prefix and 80 random bits. */
-export function newId(prefix: "usr" | "ws" | "inv"): string {
-  return `${prefix}_${crypto.randomBytes(10).toString("base64url")}`;
-}

@@ -12,7 +12,7 @@ import { withDocumentValue } from "@/models/fitDesign";
 import { getDesignOptionById } from "@/db/queries/options";
 import { insertRevisionOnBase } from "@/db/queries/option-revisions";
 import { getBenchRunById } from "@/db/queries/bench";
-import { deleteObject, putObject } from "../storage/storage";
+import { deleteObject, putObject } from "@/services/storage/storage";
 import { parseBenchCsv } from "./csv";
 import { insertStoredFile, newFileId, newObjectKey } from "@/db/queries/files";
 import { getRevisionByNumber } from "@/db/queries/options";

@@ -7,7 +7,7 @@ import { getRevisionByNumber, listOptionsByProject, type OptionRecord, type Revi
 import { getDeratingByWorkspace, type DeratingValues, type WorkspaceDerating } from "@/db/queries/derating";
 
 // THE evaluation of a stored revision: read the row, parse the document
-// (models/schema.ts, which upgrades an older version), put the workspace's
+// (models/input/schema.ts, which upgrades an older version), put the workspace's
 // derating policy in place of the document's own block when one is set
 // (services/derating/policy.ts), evaluate. The budget page and its data
 // route, the comparison, the review page, the reports and the background

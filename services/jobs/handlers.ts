@@ -6,9 +6,9 @@ import { mergeSweepChunks, sweepGrid, type SweepResult, type SweepSpec } from "@
 import { monteCarlo, type MonteCarloResult } from "@/models/spread";
 import { AppError } from "@/lib/errors";
 import { loadRevisionEvaluation } from "@/services/evaluation/revision";
-import { putObject, deleteObject } from "../storage/storage";
-import { controllerHeatmap, loadReportData } from "../reports/data";
-import { renderReportPdf } from "../reports/pdf";
+import { putObject, deleteObject } from "@/services/storage/storage";
+import { controllerHeatmap, loadReportData } from "@/services/reports/data";
+import { renderReportPdf } from "@/services/reports/pdf";
 import { mergeMonteCarlo, batchSeed } from "./monteCarloMerge";
 import { monteCarloJobPayloadSchema, reportJobPayloadSchema, sweepJobPayloadSchema } from "@/lib/jobs/schema";
 import { completeJobById, updateJobProgressById, type JobRecord } from "@/db/queries/jobs";

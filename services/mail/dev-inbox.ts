@@ -1,5 +1,5 @@
 import "server-only";
-import type { Member } from "../auth/member";
+import type { Member } from "@/services/auth/member";
 import { listDevMailForUser, type DevMailRecord } from "@/db/queries/dev-mailbox";
 
 export { devInboxEnabled } from "./mail";

@@ -1,13 +1,14 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/roles";
-import type { Member } from "../auth/member";
-import { createToken, hashToken, newId } from "../auth/secrets";
-import { appLink, sendMail } from "../mail/mail";
+import type { Member } from "@/services/auth/member";
+import { createToken, hashToken } from "@/services/auth/secrets";
+import { appLink, sendMail } from "@/services/mail/mail";
 import { getMemberByUser } from "@/db/queries/members";
 import { getUserByEmail } from "@/db/queries/accounts";
 import { deleteInviteById, getInviteByTokenHash, insertInvite, type InviteRecord } from "@/db/queries/invites";
 import type { InviteInput } from "@/lib/accounts/schema";
+import { newRecordId } from "@/db/ids";
 
 /** How long an invitation link works (policy). */
 export const INVITE_TTL_DAYS = 7;
@@ -28,7 +29,7 @@ export async function createInvite(member: Member, { email, role }: InviteInput)
     throw new AppError("conflict", msg, [{ path: "email", message: msg }]);
   }
   const { token, tokenHash } = createToken();
-  const id = newId("inv");
+  const id = newRecordId("inv");
   const expiresAt = new Date(Date.now() + INVITE_TTL_DAYS * 24 * 3600 * 1000);
   await insertInvite({ id, workspaceId: member.workspace.id, email, role, tokenHash, invitedBy: member.user.id, expiresAt });
   const link = appLink("/invite", { token });

@@ -1,7 +1,7 @@
 import "server-only";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/roles";
-import type { Member } from "../auth/member";
+import type { Member } from "@/services/auth/member";
 import { deleteMemberByUser, updateMemberRoleByUser, type MemberChange } from "@/db/queries/members";
 
 const LAST_ADMIN = "A workspace needs at least one admin. Make someone else admin first.";

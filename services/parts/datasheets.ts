@@ -4,7 +4,7 @@ import { getDb } from "@/db/knex";
 import { AppError } from "@/lib/errors";
 import { MAX_DATASHEET_BYTES } from "@/lib/limits";
 import { looksLikePdf, safePdfFilename } from "./pdfCheck";
-import { deleteObject, putObject } from "../storage/storage";
+import { deleteObject, putObject } from "@/services/storage/storage";
 import { deleteStoredFileById, insertStoredFile, newFileId, newObjectKey, type StoredFileRecord } from "@/db/queries/files";
 import { setPartDatasheetById } from "@/db/queries/parts";
 

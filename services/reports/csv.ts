@@ -9,7 +9,7 @@ import { writeCsv } from "@/lib/csv";
 // the header; numbers are SI and unrounded (JavaScript's shortest
 // round-trip form) so a spreadsheet recomputes what the app shows. The first
 // line is one cell starting "#" with the caution; every cell goes through
-// the shared writer (app/_lib/csv.ts), so an option or part name cannot
+// the shared writer (lib/csv.ts), so an option or part name cannot
 // split a line or plant a formula.
 export const LOSS_COLUMN = "loss [W]";
 export const TEMPERATURE_COLUMN = "temperature [°C]";

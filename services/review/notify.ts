@@ -1,5 +1,5 @@
 import "server-only";
-import { appLink, sendMail } from "../mail/mail";
+import { appLink, sendMail } from "@/services/mail/mail";
 import { listMemberEmailsByRoles } from "@/db/queries/reviews";
 
 // Who hears about each step, and the text they get. Mail goes out after the

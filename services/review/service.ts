@@ -1,5 +1,5 @@
 import "server-only";
-import type { Member } from "../auth/member";
+import type { Member } from "@/services/auth/member";
 import { AppError } from "@/lib/errors";
 import { getDesignOptionById, type OptionRecord } from "@/db/queries/options";
 import { insertReviewSubmission, listReviewsByOption, updateReviewDecisionById, type NewComment, type ReviewRecord } from "@/db/queries/reviews";

@@ -1,9 +1,9 @@
 import "server-only";
 import crypto from "node:crypto";
 import { AppError } from "@/lib/errors";
-import { hashToken } from "../auth/secrets";
-import type { Member } from "../auth/member";
-import { checkPassword } from "../accounts/sign-in";
+import { hashToken } from "@/services/auth/secrets";
+import type { Member } from "@/services/auth/member";
+import { checkPassword } from "@/services/accounts/sign-in";
 import { getDb } from "@/db/knex";
 import { getTokenMemberByHash, insertApiToken, revokeApiTokenById } from "@/db/queries/api-tokens";
 import { insertActivity } from "@/db/queries/activity";

@@ -1,5 +1,5 @@
 // Mapping the calculator's output at several corners onto the design
-// document's waveform points (scheme in models/schemaOperating.ts; the
+// document's waveform points (scheme in models/input/schemaOperating.ts; the
 // waveform fields under their new names turnOnVds/turnOnId/turnOffVds/turnOffId).
 import { describe, expect, it } from "vitest";
 import { toDesignWaveforms } from "@/models/converter/designPoints";

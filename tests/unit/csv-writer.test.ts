@@ -1,4 +1,4 @@
-// The shared CSV writer (app/_lib/csv.ts): every cell quoted, formula
+// The shared CSV writer (lib/csv.ts): every cell quoted, formula
 // starts neutralised (OWASP "CSV Injection"), numbers left as numbers, and
 // what it writes reads back cell for cell.
 import Papa from "papaparse";

@@ -83,4 +83,21 @@ describe("the tree", () => {
     expect(files.length).toBeGreaterThan(300);
     expect(problems).toEqual([]);
   });
+
+  it("routes only read through db/: every write goes through a service", () => {
+    const listed = execFileSync("git", ["ls-files", "-co", "--exclude-standard", "app"], { cwd: ROOT, encoding: "utf8" }).split("\n");
+    const writes: string[] = [];
+    for (const f of listed.filter((x) => /\.(ts|tsx)$/.test(x) && fs.existsSync(path.join(ROOT, x)))) {
+      const src = fs.readFileSync(path.join(ROOT, f), "utf8");
+      for (const m of src.matchAll(/import\s+(type\s+)?\{([^}]*)\}\s+from\s+"@\/db\/queries\/[^"]+"/g)) {
+        if (m[1]) continue;
+        const names = m[2]
+          .split(",")
+          .map((n) => n.trim())
+          .filter((n) => n && !n.startsWith("type "));
+        for (const n of names) if (!/^(get|list|count)[A-Z]/.test(n)) writes.push(`${f}: ${n}`);
+      }
+    }
+    expect(writes).toEqual([]);
+  });
 });

@@ -1,6 +1,6 @@
 /**
  * Field-level normalisation for the part form: the same parsers the server
- * runs (models/units.ts qty, the hFE and volt-second readers), so "0.047 µC"
+ * runs (models/input/units.ts qty, the hFE and volt-second readers), so "0.047 µC"
  * becomes "47 nC" on blur and "47 V" in a charge field is refused there.
  */
 import { qty } from "@/models/input/units";
