@@ -2,7 +2,8 @@
 // to an HTTP status and a user-facing message; causes are logged, never shown.
 export type AppErrorCode = "bad_request" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "too_many_requests" | "payload_too_large" | "unsupported_media_type" | "unprocessable" | "unavailable";
 
-const STATUS: Record<AppErrorCode, number> = {
+/** The HTTP status of each refusal (route answers; a server action's state carries the code). */
+export const STATUS_OF_CODE: Readonly<Record<AppErrorCode, number>> = {
   bad_request: 400,
   unauthenticated: 401,
   forbidden: 403,
@@ -30,7 +31,7 @@ export class AppError extends Error {
     readonly extra: { retryAfterSeconds?: number } = {},
   ) {
     super(message);
-    this.status = STATUS[code];
+    this.status = STATUS_OF_CODE[code];
   }
 }
 

@@ -231,7 +231,7 @@ function percentile(sorted: Float64Array, q: number): number | null {
 }
 
 /** Wilson score interval (Wilson 1927) for k successes in n trials at 95 %. */
-function wilson(k: number, n: number): [number, number] {
+export function wilson(k: number, n: number): [number, number] {
   const z = 1.959963984540054;
   const p = k / n, z2n = (z * z) / n;
   const centre = (p + z2n / 2) / (1 + z2n);

@@ -1,5 +1,5 @@
 import "server-only";
-import type { MonteCarloResult, Percentiles } from "@/models/spread";
+import { wilson, type MonteCarloResult, type Percentiles } from "@/models/spread";
 
 // A long Monte Carlo run as independent batches (each a seeded monteCarlo()
 // call), merged. Exact after merging: sample counts, the fractions over the
@@ -11,15 +11,6 @@ import type { MonteCarloResult, Percentiles } from "@/models/spread";
 /** Batch b's seed: the user's seed spread by a fixed odd constant (golden ratio, 32 bits), so batches differ. */
 export function batchSeed(seed: number, batch: number): number {
   return (seed + Math.imul(batch, 0x9e3779b9)) >>> 0;
-}
-
-/** Wilson score interval (Wilson 1927) for k successes in n trials at 95 %. */
-function wilson(k: number, n: number): [number, number] {
-  const z = 1.959963984540054;
-  const p = k / n, z2n = (z * z) / n;
-  const centre = (p + z2n / 2) / (1 + z2n);
-  const half = (z * Math.sqrt((p * (1 - p)) / n + z2n / (4 * n))) / (1 + z2n);
-  return [k === 0 ? 0 : Math.max(0, centre - half), k === n ? 1 : Math.min(1, centre + half)];
 }
 
 export interface MergedMonteCarlo extends MonteCarloResult {

@@ -6,6 +6,7 @@
 // server-reference manifest, which names each action's file and export.
 import fs from "node:fs";
 import path from "node:path";
+import { STATUS_OF_CODE } from "@/lib/errors";
 import type { Client } from "./http";
 
 interface ManifestEntry {
@@ -30,20 +31,6 @@ export function actionId(key: string): string {
 
 export type ActionReply =
   { kind: "done"; status: number; state?: Record<string, unknown>; redirect?: string } | { kind: "refused"; status: number; code: string; message: string };
-
-const CODE_STATUS: Record<string, number> = {
-  bad_request: 400,
-  unauthenticated: 401,
-  forbidden: 403,
-  not_found: 404,
-  conflict: 409,
-  payload_too_large: 413,
-  unsupported_media_type: 415,
-  unprocessable: 422,
-  too_many_requests: 429,
-  unavailable: 503,
-  internal: 500,
-};
 
 /** The action's returned state, read from the RSC stream of the answer (a line "<id>:<json>" holding { ok, … }). */
 function stateOf(text: string): Record<string, unknown> | undefined {
@@ -72,5 +59,5 @@ export async function callAction(client: Client, opts: { key: string; page: stri
   if (!state) return { kind: "refused", status: r.status, code: "no-state", message: `HTTP ${r.status}: ${r.text.slice(0, 200)}` };
   if (state.ok) return { kind: "done", status: r.status, state };
   const code = String(state.code ?? "internal");
-  return { kind: "refused", status: CODE_STATUS[code] ?? 500, code, message: String(state.message) };
+  return { kind: "refused", status: (STATUS_OF_CODE as Record<string, number>)[code] ?? 500, code, message: String(state.message) };
 }
